@@ -1,0 +1,85 @@
+import { Module, type DynamicModule } from '@nestjs/common';
+import { ConfigModule } from '@nestjs/config';
+import { APP_FILTER, APP_GUARD } from '@nestjs/core';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { LoggerModule } from 'nestjs-pino';
+import { existsSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import { AuditModule } from './audit/audit.module';
+import { AuthModule } from './auth/auth.module';
+import { ApiExceptionFilter } from './common/filters/api-exception.filter';
+import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
+import { RolesGuard } from './common/guards/roles.guard';
+import {
+  appConfig,
+  authConfig,
+  databaseConfig,
+  mailConfig,
+  type DatabaseConfig,
+} from './config/configuration';
+import { validateEnv } from './config/env.schema';
+import { dataSourceOptions } from './database/data-source-options';
+import { HealthModule } from './health/health.module';
+import { MailModule } from './mail/mail.module';
+import { UsersModule } from './users/users.module';
+
+/** The built desk (apps/web/dist), served by the API with its index.html for desk routes. */
+function webModules(): DynamicModule[] {
+  const env = validateEnv(process.env);
+  const rootPath = resolve(env.WEB_DIST_DIR ?? join(__dirname, '../../web/dist'));
+  if (!existsSync(join(rootPath, 'index.html'))) return [];
+  return [ServeStaticModule.forRoot({ rootPath, exclude: ['/api/{*splat}'] })];
+}
+
+/**
+ * The pieces every entry point needs: validated configuration, logs and the database.
+ * Built as a function so the environment is read when the app is created, not when
+ * this file is imported (tests set theirs first).
+ */
+export function coreImports(): Array<DynamicModule | Promise<DynamicModule>> {
+  const env = validateEnv(process.env);
+  return [
+    ConfigModule.forRoot({
+      isGlobal: true,
+      // main.ts and the command-line tools load apps/api/.env themselves, before this runs.
+      ignoreEnvFile: true,
+      validate: validateEnv,
+      load: [appConfig, databaseConfig, authConfig, mailConfig],
+    }),
+    LoggerModule.forRoot({
+      pinoHttp: {
+        level: env.LOG_LEVEL,
+        redact: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'],
+        autoLogging: { ignore: (request) => request.url === '/api/health' },
+      },
+    }),
+    TypeOrmModule.forRootAsync({
+      inject: [databaseConfig.KEY],
+      useFactory: (config: DatabaseConfig) => dataSourceOptions(config),
+    }),
+  ];
+}
+
+@Module({})
+export class AppModule {
+  static forRoot(): DynamicModule {
+    return {
+      module: AppModule,
+      imports: [
+        ...coreImports(),
+        ...webModules(),
+        AuditModule,
+        MailModule,
+        UsersModule,
+        AuthModule,
+        HealthModule,
+      ],
+      providers: [
+        { provide: APP_GUARD, useClass: JwtAuthGuard },
+        { provide: APP_GUARD, useClass: RolesGuard },
+        { provide: APP_FILTER, useClass: ApiExceptionFilter },
+      ],
+    };
+  }
+}

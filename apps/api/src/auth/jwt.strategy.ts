@@ -1,0 +1,41 @@
+import { Inject, Injectable, UnauthorizedException } from '@nestjs/common';
+import { PassportStrategy } from '@nestjs/passport';
+import { InjectRepository } from '@nestjs/typeorm';
+import { ExtractJwt, Strategy } from 'passport-jwt';
+import { Repository } from 'typeorm';
+import { authConfig, type AuthConfig } from '../config/configuration';
+import { User } from '../users/entities/user.entity';
+import { type AuthenticatedUser } from './authenticated-user';
+
+export interface AccessTokenPayload {
+  sub: string;
+}
+
+/**
+ * Checks the Bearer token, then loads the person: a role change or a disabled account
+ * takes effect on the next request, not when the token expires.
+ */
+@Injectable()
+export class JwtStrategy extends PassportStrategy(Strategy) {
+  constructor(
+    @Inject(authConfig.KEY) config: AuthConfig,
+    @InjectRepository(User) private readonly users: Repository<User>,
+  ) {
+    super({
+      jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+      secretOrKey: config.jwtSecret,
+      algorithms: ['HS256'],
+      ignoreExpiration: false,
+    });
+  }
+
+  async validate(payload: AccessTokenPayload): Promise<AuthenticatedUser> {
+    const user = await this.users.findOne({
+      where: { id: payload.sub },
+      select: { id: true, email: true, displayName: true, role: true, status: true },
+    });
+    if (!user || user.status !== 'active')
+      throw new UnauthorizedException('Your session has ended; sign in again');
+    return { id: user.id, email: user.email, displayName: user.displayName, role: user.role };
+  }
+}

@@ -1,0 +1,49 @@
+import { type INestApplication } from '@nestjs/common';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import cookieParser from 'cookie-parser';
+import helmet from 'helmet';
+import { Logger } from 'nestjs-pino';
+import { createValidationPipe } from './common/pipes/validation.pipe';
+
+/**
+ * Everything main.ts sets on the app besides listening, shared with the e2e tests so
+ * they run the same API.
+ */
+export function configureApp(app: INestApplication): INestApplication {
+  app.useLogger(app.get(Logger));
+  app.setGlobalPrefix('api');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:'],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+        },
+      },
+      referrerPolicy: { policy: 'no-referrer' },
+    }),
+  );
+  app.use(cookieParser());
+  app.useGlobalPipes(createValidationPipe());
+  app.enableShutdownHooks();
+
+  const document = SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder()
+      .setTitle('Skyledger API')
+      .setDescription("The science desk's API: claims, sources, workings, verdicts and people.")
+      .setVersion('0.1.0')
+      .addBearerAuth()
+      .build(),
+  );
+  SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs-json' });
+  return app;
+}

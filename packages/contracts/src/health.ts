@@ -1,0 +1,4 @@
+export interface HealthResponse {
+  status: 'ok' | 'error';
+  checks: { database: 'up' | 'down' };
+}

@@ -1,0 +1,79 @@
+import { spawnSync } from 'node:child_process';
+import { join } from 'node:path';
+import { apiDir, migrationArgs, startApi } from './api-server.js';
+import { appEnv } from './app-env.js';
+import { freePort } from './free-port.js';
+import { startMailCatcher } from './mail-catcher.js';
+import { repoRoot, tmpDir } from './paths.js';
+import { stopService, StepFailedError } from './processes.js';
+import { TestDatabase } from './test-database.js';
+
+export interface TestStack {
+  /** Where the built desk and API answer, e.g. http://127.0.0.1:41234 */
+  baseUrl: string;
+  /** MailDev's REST API root, e.g. http://127.0.0.1:41235/api */
+  mailApiUrl: string;
+  stop(): Promise<void>;
+}
+
+function run(
+  title: string,
+  command: string,
+  args: string[],
+  env: Record<string, string>,
+  cwd = repoRoot,
+): void {
+  const result = spawnSync(command, args, {
+    cwd,
+    env: { ...process.env, ...env },
+    encoding: 'utf8',
+  });
+  if (result.status !== 0)
+    throw new StepFailedError(`${title} failed:\n${result.stdout}\n${result.stderr}`);
+}
+
+/**
+ * The built app as `npm start` runs it, on a database of its own and free ports, for
+ * browser tests: migrated, seeded with the demo newsroom, with a mail catcher.
+ * Needs `npm run build` to have run.
+ */
+export async function startTestStack(name: string): Promise<TestStack> {
+  const database = new TestDatabase(name);
+  await database.create();
+  const [port, smtpPort, webPort] = [await freePort(), await freePort(), await freePort()];
+  const env = {
+    ...appEnv({ port, smtpPort, databaseName: database.name }),
+    ...database.access,
+    DB_NAME: database.name,
+    OUTBOX_POLL_MS: '200',
+  };
+  const stops: Array<() => Promise<unknown>> = [() => database.drop()];
+  try {
+    run('migrations', process.execPath, migrationArgs(), env, apiDir);
+    run(
+      'the demo seed',
+      process.execPath,
+      [join(repoRoot, 'node_modules/tsx/dist/cli.mjs'), join(repoRoot, 'seeds-demo/src/run.ts')],
+      env,
+    );
+    const mail = await startMailCatcher({
+      smtpPort,
+      webPort,
+      mailDirectory: join(tmpDir, `maildev-${database.name}`),
+      quiet: true,
+    });
+    stops.push(() => stopService(mail, 'the mail catcher'));
+    const api = await startApi(env, port, true);
+    stops.push(() => stopService(api, 'the API'));
+  } catch (error) {
+    for (const stop of stops.reverse()) await stop();
+    throw error;
+  }
+  return {
+    baseUrl: `http://127.0.0.1:${port}`,
+    mailApiUrl: `http://127.0.0.1:${webPort}/api`,
+    async stop() {
+      for (const stop of stops.reverse()) await stop().catch(() => undefined);
+    },
+  };
+}
