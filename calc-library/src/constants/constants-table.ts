@@ -1,0 +1,96 @@
+import {
+  ar6Ch4Forcing1750To2019,
+  ar6Co2DoublingForcing,
+  ar6Co2Forcing1750To2019,
+  ar6CumulativeCo2Emissions,
+  ar6EarthEnergyImbalance,
+  ar6EquilibriumClimateSensitivity,
+  ar6N2oForcing1750To2019,
+  ar6PlanckFeedback,
+  ar6TcrePerPetagramCarbon,
+  ar6TotalAnthropogenicForcing,
+  ar6TransientClimateResponse,
+  ar6TroposphericAdjustmentCh4,
+  ar6TroposphericAdjustmentCo2,
+  ar6TroposphericAdjustmentN2o,
+} from './ar6-assessed-values.js';
+import {
+  ch4Concentration1750,
+  ch4Concentration2019,
+  co2Concentration1750,
+  co2Concentration2019,
+  n2oConcentration1750,
+  n2oConcentration2019,
+} from './atmospheric-concentrations.js';
+import {
+  airborneFraction,
+  ar6TcrePerThousandGtCo2,
+  carbonAtomicWeight,
+  carbonPerPpmCo2,
+  co2MolarMass,
+  co2PerCarbonMassRatio,
+  co2PerPpmCo2,
+  oxygenAtomicWeight,
+} from './carbon-constants.js';
+import {
+  bondAlbedo,
+  earthMeanRadius,
+  geothermalHeatFlow,
+  geothermalHeatFlowPollack,
+  oceanAreaFraction,
+  solarIrradiance,
+} from './earth-constants.js';
+import { earthSurfaceArea } from './earth-surface-area.js';
+import { seawaterDensity, seawaterSpecificHeat } from './ocean-constants.js';
+import { type PhysicalConstant } from './physical-constant.js';
+import { boltzmannConstant, planckConstant, speedOfLight } from './si-defining-constants.js';
+import { stefanBoltzmannConstant } from './stefan-boltzmann-constant.js';
+import { daysPerJulianYear, secondsPerDay, secondsPerYear } from './time-constants.js';
+
+/** Every constant of the library, each with its value, unit, uncertainty and source. */
+export const constants: readonly PhysicalConstant[] = [
+  planckConstant,
+  boltzmannConstant,
+  speedOfLight,
+  stefanBoltzmannConstant,
+  solarIrradiance,
+  bondAlbedo,
+  earthMeanRadius,
+  earthSurfaceArea,
+  oceanAreaFraction,
+  secondsPerDay,
+  daysPerJulianYear,
+  secondsPerYear,
+  geothermalHeatFlow,
+  geothermalHeatFlowPollack,
+  ar6Co2DoublingForcing,
+  ar6TotalAnthropogenicForcing,
+  ar6Co2Forcing1750To2019,
+  ar6Ch4Forcing1750To2019,
+  ar6N2oForcing1750To2019,
+  ar6EarthEnergyImbalance,
+  ar6EquilibriumClimateSensitivity,
+  ar6TransientClimateResponse,
+  ar6PlanckFeedback,
+  ar6TcrePerPetagramCarbon,
+  ar6TcrePerThousandGtCo2,
+  ar6TroposphericAdjustmentCo2,
+  ar6TroposphericAdjustmentCh4,
+  ar6TroposphericAdjustmentN2o,
+  ar6CumulativeCo2Emissions,
+  co2Concentration1750,
+  co2Concentration2019,
+  ch4Concentration1750,
+  ch4Concentration2019,
+  n2oConcentration1750,
+  n2oConcentration2019,
+  carbonAtomicWeight,
+  oxygenAtomicWeight,
+  co2MolarMass,
+  co2PerCarbonMassRatio,
+  carbonPerPpmCo2,
+  co2PerPpmCo2,
+  airborneFraction,
+  seawaterSpecificHeat,
+  seawaterDensity,
+];
