@@ -1,0 +1,127 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import {
+  desktop,
+  expectAccessible,
+  openBrowser,
+  phone,
+  screenshot,
+  type Browser,
+} from './support/browser';
+import { demo, demoPassword, navLinks, signIn } from './support/desk';
+import { linkTo, waitForMail } from './support/mailbox';
+
+describe('people and invitations', () => {
+  let browser: Browser;
+
+  beforeAll(async () => {
+    browser = await openBrowser();
+  });
+  afterAll(() => browser.close());
+
+  it('shows the desk chief a sortable People page that passes axe at both widths', async () => {
+    for (const [name, viewport] of [
+      ['desktop', desktop],
+      ['phone', phone],
+    ] as const) {
+      const page = await browser.newPage(viewport);
+      await signIn(page, browser.baseUrl, demo.desk_chief.email);
+      await page.getByRole('link', { name: 'People' }).click();
+      const table = page.getByRole('table');
+      await table.getByRole('cell', { name: demo.reporter.email }).waitFor();
+      await expectAccessible(page);
+      await screenshot(page, `people-${name}`);
+      await page.close();
+    }
+  });
+
+  it('lets the desk chief invite someone, whose mailed link sets a password', async () => {
+    const chief = await browser.newPage();
+    await signIn(chief, browser.baseUrl, demo.desk_chief.email);
+    await chief.getByRole('link', { name: 'People' }).click();
+    await chief.getByRole('button', { name: 'Invite someone' }).click();
+    const dialog = chief.getByRole('dialog');
+    await dialog.getByLabel('Name').fill('Oskar Venn');
+    await dialog.getByLabel('E-mail').fill('oskar.venn@marrowby-gazette.test');
+    await dialog.getByRole('combobox', { name: 'Role' }).click();
+    await chief.getByRole('option', { name: 'Science editor' }).click();
+    await expectAccessible(chief);
+    await screenshot(chief, 'people-invite-dialog');
+    await dialog.getByRole('button', { name: 'Send invitation' }).click();
+    await chief.getByText('Invitation sent to oskar.venn@marrowby-gazette.test').waitFor();
+    const row = chief.getByRole('row', { name: /Oskar Venn/ });
+    await row.getByText('Invited').waitFor();
+
+    const mail = await waitForMail(
+      'oskar.venn@marrowby-gazette.test',
+      /invited to the Skyledger desk/,
+    );
+    const link = linkTo(mail, '/accept-invite');
+    expect(link.startsWith(browser.baseUrl)).toBe(true);
+
+    // The invited person opens the link in a browser of their own.
+    const other = await openBrowser();
+    try {
+      const invitee = await other.newPage();
+      await invitee.goto(link);
+      await invitee.getByText('oskar.venn@marrowby-gazette.test').waitFor();
+      await invitee.getByText('Science editor').first().waitFor();
+      await expectAccessible(invitee);
+      await screenshot(invitee, 'accept-invite');
+      await invitee.getByLabel('New password', { exact: true }).fill('a good long passphrase');
+      await invitee.getByLabel('New password again').fill('a good long passphrase');
+      await invitee.getByRole('button', { name: 'Set my password' }).click();
+      await invitee.getByText('Your password is set, Oskar Venn').waitFor();
+      await invitee.getByRole('link', { name: 'Sign in' }).click();
+      await invitee.getByRole('button', { name: 'Sign in' }).waitFor();
+      await signIn(
+        invitee,
+        other.baseUrl,
+        'oskar.venn@marrowby-gazette.test',
+        'a good long passphrase',
+      );
+      expect(await navLinks(invitee)).toEqual(['Desk', 'Account']);
+      await invitee.getByText('Oskar Venn').first().waitFor();
+    } finally {
+      await other.close();
+    }
+
+    await chief.reload();
+    await chief
+      .getByRole('row', { name: /Oskar Venn/ })
+      .getByText('Active')
+      .waitFor();
+    await chief.close();
+  });
+
+  it('tells a reporter who opens People that it is not for their role', async () => {
+    const page = await browser.newPage();
+    await signIn(page, browser.baseUrl, demo.reporter.email);
+    await page.goto(`${browser.baseUrl}/people`);
+    await page.getByText(/open to these roles only/).waitFor();
+    await expectAccessible(page);
+    await page.close();
+  });
+
+  it('resets a forgotten password through the mailed link', async () => {
+    const page = await browser.newPage();
+    await page.goto(`${browser.baseUrl}/sign-in`);
+    await page.getByRole('link', { name: /forgot/i }).click();
+    await page.getByLabel('E-mail').fill(demo.copy_desk.email);
+    await page.getByRole('button', { name: /send|reset/i }).click();
+    await page.getByText(/if an account exists/i).waitFor();
+    await expectAccessible(page);
+    await screenshot(page, 'forgot-password-sent');
+
+    const mail = await waitForMail(demo.copy_desk.email, /Reset your Skyledger password/);
+    await page.goto(linkTo(mail, '/reset-password'));
+    // Set back to the demo password, so the other tests can still sign in as the copy desk.
+    await page.getByLabel('New password', { exact: true }).fill(demoPassword);
+    await page.getByLabel('New password again').fill(demoPassword);
+    await page.getByRole('button', { name: 'Set the new password' }).click();
+    await page.getByText('Your new password is set').waitFor();
+    await page.getByRole('link', { name: 'Sign in' }).click();
+    await signIn(page, browser.baseUrl, demo.copy_desk.email, demoPassword);
+    expect(await navLinks(page)).toEqual(['Desk', 'Account']);
+    await page.close();
+  });
+});

@@ -1,0 +1,73 @@
+import AxeBuilder from '@axe-core/playwright';
+import { tmpDir } from '@skyledger/devstack';
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { expect, inject } from 'vitest';
+
+export const desktop = { width: 1280, height: 860 };
+export const phone = { width: 375, height: 740 };
+export const screenshotDir = join(tmpDir, 'screens');
+
+export interface Browser {
+  context: BrowserContext;
+  baseUrl: string;
+  newPage(viewport?: { width: number; height: number }): Promise<Page>;
+  close(): Promise<void>;
+}
+
+/** Debian's Chromium, headless, with a fresh profile under the project's ignored tmp/. */
+export async function openBrowser(): Promise<Browser> {
+  mkdirSync(tmpDir, { recursive: true });
+  mkdirSync(screenshotDir, { recursive: true });
+  const profile = mkdtempSync(join(tmpDir, 'chr-'));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+  const baseUrl = inject('baseUrl');
+  return {
+    context,
+    baseUrl,
+    async newPage(viewport = desktop) {
+      const page = await context.newPage();
+      await page.setViewportSize(viewport);
+      page.on('pageerror', (error) => {
+        throw new Error(`script error on ${page.url()}: ${error.message}`);
+      });
+      return page;
+    },
+    async close() {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
+
+/** No serious or critical axe violation on the page as it is now. */
+export async function expectAccessible(page: Page): Promise<void> {
+  const results = await new AxeBuilder({ page }).analyze();
+  const bad = results.violations.filter((violation) =>
+    ['serious', 'critical'].includes(violation.impact ?? ''),
+  );
+  expect(
+    bad.map(
+      (violation) =>
+        `${violation.id}: ${violation.help} (${violation.nodes.map((node) => node.target.join(' ')).join(', ')})`,
+    ),
+  ).toEqual([]);
+}
+
+export async function screenshot(page: Page, name: string): Promise<void> {
+  await page.screenshot({ path: join(screenshotDir, `${name}.png`), fullPage: true });
+}

@@ -1,0 +1,22 @@
+import '@/styles/radix.css';
+import '@/styles/fonts.css';
+import '@/styles/theme.css';
+import { Theme } from '@radix-ui/themes';
+import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
+
+export function AppProvider({
+  queryClient,
+  children,
+}: {
+  queryClient: QueryClient;
+  children: ReactNode;
+}) {
+  return (
+    <QueryClientProvider client={queryClient}>
+      <Theme accentColor="jade" grayColor="sage" radius="medium" panelBackground="solid">
+        {children}
+      </Theme>
+    </QueryClientProvider>
+  );
+}

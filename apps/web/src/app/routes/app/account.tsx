@@ -1,0 +1,54 @@
+import { Button, Card, DataList, Flex, Heading, Text } from '@radix-ui/themes';
+import { roleLabels, userStatusLabels } from '@skyledger/contracts';
+import { DocumentTitle } from '@/components/ui/document-title';
+import { useCurrentUser } from '@/features/auth/current-user';
+import { useSignOut } from '@/features/auth/api/sign-out';
+
+export function Component() {
+  const user = useCurrentUser();
+  const signOut = useSignOut();
+
+  return (
+    <Flex direction="column" gap="5" maxWidth="640px">
+      <DocumentTitle title="Account" />
+      <Heading as="h1" size="7">
+        Your account
+      </Heading>
+      <Card size="3">
+        <DataList.Root orientation={{ initial: 'vertical', sm: 'horizontal' }}>
+          <DataList.Item>
+            <DataList.Label>Name</DataList.Label>
+            <DataList.Value>{user.displayName}</DataList.Value>
+          </DataList.Item>
+          <DataList.Item>
+            <DataList.Label>E-mail</DataList.Label>
+            <DataList.Value>{user.email}</DataList.Value>
+          </DataList.Item>
+          <DataList.Item>
+            <DataList.Label>Role</DataList.Label>
+            <DataList.Value>{roleLabels[user.role]}</DataList.Value>
+          </DataList.Item>
+          <DataList.Item>
+            <DataList.Label>Status</DataList.Label>
+            <DataList.Value>{userStatusLabels[user.status]}</DataList.Value>
+          </DataList.Item>
+        </DataList.Root>
+      </Card>
+      <Text as="p" color="gray" className="sl-prose" size="2">
+        A desk chief sets names and roles. To change your password, sign out and use &ldquo;Forgot
+        your password?&rdquo; on the sign-in page.
+      </Text>
+      <Flex>
+        <Button
+          variant="soft"
+          color="gray"
+          highContrast
+          loading={signOut.isPending}
+          onClick={() => signOut.mutate()}
+        >
+          Sign out
+        </Button>
+      </Flex>
+    </Flex>
+  );
+}

@@ -1,0 +1,93 @@
+import { Button, Container, Flex, TabNav, Text } from '@radix-ui/themes';
+import { roleLabels } from '@skyledger/contracts';
+import type { QueryClient } from '@tanstack/react-query';
+import {
+  Outlet,
+  redirect,
+  Link as RouterLink,
+  useLocation,
+  useNavigation,
+  type LoaderFunctionArgs,
+} from 'react-router-dom';
+import { Wordmark } from '@/components/ui/wordmark';
+import { paths } from '@/config/paths';
+import { sessionQueryOptions, useSession } from '@/features/auth/api/get-session';
+import { useSignOut } from '@/features/auth/api/sign-out';
+import { CurrentUserProvider } from '@/features/auth/current-user';
+import { navItemsFor } from '../../nav-items';
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const user = await queryClient.ensureQueryData(sessionQueryOptions());
+    if (!user) {
+      const { pathname, search } = new URL(request.url);
+      throw redirect(paths.auth.signIn.getHref(`${pathname}${search}`));
+    }
+    return null;
+  };
+
+function isCurrent(pathname: string, to: string): boolean {
+  return to === paths.app.desk.getHref() ? pathname === to : pathname.startsWith(to);
+}
+
+export function Component() {
+  const user = useSession();
+  const { pathname } = useLocation();
+  const navigation = useNavigation();
+  const signOut = useSignOut();
+
+  // Only between a session ending and the move to the sign-in page.
+  if (!user) return null;
+
+  return (
+    <Flex direction="column" minHeight="100vh">
+      <header className="sl-app-header">
+        {navigation.state === 'loading' ? (
+          <div className="sl-progress" role="progressbar" aria-label="Loading the page" />
+        ) : null}
+        <a href="#main" className="sl-skip-link">
+          Skip to the page
+        </a>
+        <Container size="4" px={{ initial: '4', sm: '6' }}>
+          <Flex justify="between" align="center" gap="4" pt="4" pb="2" wrap="wrap">
+            <Wordmark />
+            <Flex align="center" gap="4">
+              <Flex direction="column" align="end">
+                <Text size="2" weight="bold">
+                  {user.displayName}
+                </Text>
+                <Text size="1" color="gray">
+                  {roleLabels[user.role]}
+                </Text>
+              </Flex>
+              <Button
+                variant="soft"
+                color="gray"
+                highContrast
+                loading={signOut.isPending}
+                onClick={() => signOut.mutate()}
+              >
+                Sign out
+              </Button>
+            </Flex>
+          </Flex>
+          <TabNav.Root aria-label="Desk sections" size="2">
+            {navItemsFor(user.role).map((item) => (
+              <TabNav.Link key={item.id} asChild active={isCurrent(pathname, item.to)}>
+                <RouterLink to={item.to}>{item.label}</RouterLink>
+              </TabNav.Link>
+            ))}
+          </TabNav.Root>
+        </Container>
+      </header>
+      <main id="main" tabIndex={-1} className="sl-app-main">
+        <Container size="4" px={{ initial: '4', sm: '6' }} py={{ initial: '5', sm: '7' }}>
+          <CurrentUserProvider user={user}>
+            <Outlet />
+          </CurrentUserProvider>
+        </Container>
+      </main>
+    </Flex>
+  );
+}

@@ -1,0 +1,35 @@
+/** Every URL of the desk. Build links with getHref, match routes with path. */
+export const paths = {
+  auth: {
+    signIn: {
+      path: '/sign-in',
+      getHref: (next?: string | null) =>
+        next ? `/sign-in?${new URLSearchParams({ next }).toString()}` : '/sign-in',
+    },
+    forgotPassword: { path: '/forgot-password', getHref: () => '/forgot-password' },
+    resetPassword: {
+      path: '/reset-password',
+      getHref: (token: string) => `/reset-password?${new URLSearchParams({ token }).toString()}`,
+    },
+    acceptInvite: {
+      path: '/accept-invite',
+      getHref: (token: string) => `/accept-invite?${new URLSearchParams({ token }).toString()}`,
+    },
+  },
+  app: {
+    desk: { path: '/', getHref: () => '/' },
+    people: { path: '/people', getHref: () => '/people' },
+    account: { path: '/account', getHref: () => '/account' },
+  },
+} as const;
+
+/**
+ * Where to go after signing in: only a path inside the desk, never another origin
+ * (`//evil.test` or `https://…` would make the sign-in page an open redirect).
+ */
+export function safeNextPath(next: string | null | undefined): string {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) {
+    return paths.app.desk.getHref();
+  }
+  return next;
+}

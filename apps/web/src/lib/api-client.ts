@@ -1,0 +1,158 @@
+import { isApiErrorBody, type ApiErrorBody, type SessionResponse } from '@skyledger/contracts';
+import { env } from '@/config/env';
+
+/** The one error the API client throws; `status` 0 means the server could not be reached. */
+export class ApiError extends Error {
+  readonly status: number;
+  readonly body: ApiErrorBody;
+
+  constructor(status: number, body: ApiErrorBody) {
+    super(body.message);
+    this.name = 'ApiError';
+    this.status = status;
+    this.body = body;
+  }
+}
+
+export function isApiError(error: unknown): error is ApiError {
+  return error instanceof ApiError;
+}
+
+type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+
+export interface RequestOptions {
+  method?: Method;
+  body?: unknown;
+  /** Query string parameters; undefined values are left out. */
+  params?: Record<string, string | number | undefined>;
+  /** Send the access token and refresh it on a 401 (default true). */
+  auth?: boolean;
+  signal?: AbortSignal;
+}
+
+export interface SessionEvents {
+  /** A 401 was answered by a successful refresh: the token and perhaps the person changed. */
+  onRefreshed: (session: SessionResponse) => void;
+  /** The refresh failed: the session is over and the person must sign in again. */
+  onExpired: () => void;
+}
+
+// The access token lives in memory only: a page reload restores it from the
+// httpOnly refresh cookie, so script on the page can never read a long-lived secret.
+let accessToken: string | null = null;
+let refreshInFlight: Promise<SessionResponse> | null = null;
+let sessionEvents: SessionEvents = { onRefreshed: () => {}, onExpired: () => {} };
+
+export function setAccessToken(token: string | null): void {
+  accessToken = token;
+}
+
+export function setSessionEvents(events: SessionEvents): void {
+  sessionEvents = events;
+}
+
+function buildUrl(path: string, params: RequestOptions['params']): string {
+  const query = new URLSearchParams();
+  for (const [key, value] of Object.entries(params ?? {})) {
+    if (value !== undefined) query.set(key, String(value));
+  }
+  const search = query.toString();
+  return `${env.apiUrl}${path}${search ? `?${search}` : ''}`;
+}
+
+function fallbackBody(response: Response): ApiErrorBody {
+  const message =
+    response.status >= 500
+      ? `The desk server ran into a problem (${response.status}). Try again in a moment.`
+      : `The desk server answered with an unexpected error (${response.status}).`;
+  return { statusCode: response.status, error: response.statusText || 'Error', message };
+}
+
+async function toApiError(response: Response): Promise<ApiError> {
+  const body: unknown = await response.json().catch(() => undefined);
+  return new ApiError(response.status, isApiErrorBody(body) ? body : fallbackBody(response));
+}
+
+async function send(
+  path: string,
+  options: RequestOptions,
+  token: string | null,
+): Promise<Response> {
+  const headers = new Headers({ Accept: 'application/json' });
+  if (options.body !== undefined) headers.set('Content-Type', 'application/json');
+  if (token) headers.set('Authorization', `Bearer ${token}`);
+  try {
+    return await fetch(buildUrl(path, options.params), {
+      method: options.method ?? 'GET',
+      headers,
+      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      credentials: 'same-origin',
+      signal: options.signal,
+    });
+  } catch (cause) {
+    if (options.signal?.aborted) throw cause;
+    throw new ApiError(0, {
+      statusCode: 0,
+      error: 'Network Error',
+      message: "Can't reach the desk server. Check your connection and try again.",
+    });
+  }
+}
+
+async function parse<T>(response: Response): Promise<T> {
+  if (!response.ok) throw await toApiError(response);
+  if (response.status === 204 || response.status === 202) return undefined as T;
+  const text = await response.text();
+  return (text ? JSON.parse(text) : undefined) as T;
+}
+
+/**
+ * Trades the refresh cookie for a new access token. Concurrent callers share one
+ * request: the server rotates the refresh token on every use and treats a replayed
+ * one as theft, so two parallel refreshes would end the session.
+ */
+export function refreshSession(): Promise<SessionResponse> {
+  refreshInFlight ??= send('/auth/refresh', { method: 'POST' }, null)
+    .then((response) => parse<SessionResponse>(response))
+    .then((session) => {
+      accessToken = session.accessToken;
+      return session;
+    })
+    .finally(() => {
+      refreshInFlight = null;
+    });
+  return refreshInFlight;
+}
+
+export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  const auth = options.auth ?? true;
+  const tokenSent = auth ? accessToken : null;
+  const response = await send(path, options, tokenSent);
+  if (response.status !== 401 || !auth) return parse<T>(response);
+
+  // A request that raced another one's refresh already has a fresh token to retry with.
+  if (accessToken === tokenSent || accessToken === null) {
+    try {
+      sessionEvents.onRefreshed(await refreshSession());
+    } catch {
+      accessToken = null;
+      sessionEvents.onExpired();
+      throw await toApiError(response);
+    }
+  }
+  const retried = await send(path, options, accessToken);
+  if (retried.status === 401) {
+    accessToken = null;
+    sessionEvents.onExpired();
+  }
+  return parse<T>(retried);
+}
+
+export const api = {
+  get: <T>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+    apiRequest<T>(path, { ...options, method: 'GET' }),
+  post: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+    apiRequest<T>(path, { ...options, method: 'POST', body }),
+  patch: <T>(path: string, body: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+    apiRequest<T>(path, { ...options, method: 'PATCH', body }),
+};

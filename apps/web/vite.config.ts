@@ -1,0 +1,29 @@
+import react from '@vitejs/plugin-react';
+import { defaultClientConditions } from 'vite';
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  plugins: [react()],
+  resolve: {
+    alias: { '@': new URL('./src', import.meta.url).pathname },
+    // Workspace packages export their TypeScript under the `source` condition, so dev,
+    // build and tests read packages/contracts/src with no prior build.
+    conditions: ['source', ...defaultClientConditions],
+  },
+  server: {
+    host: '127.0.0.1',
+    port: 5173,
+    strictPort: true,
+    proxy: { '/api': { target: 'http://127.0.0.1:3000' } },
+  },
+  preview: { host: '127.0.0.1', port: 4173, strictPort: true },
+  build: { outDir: 'dist', emptyOutDir: true },
+  test: {
+    environment: 'jsdom',
+    setupFiles: ['./test/setup.ts'],
+    css: false,
+    include: ['src/**/*.test.{ts,tsx}', 'test/**/*.test.{ts,tsx}'],
+    unstubGlobals: true,
+    restoreMocks: true,
+  },
+});
