@@ -34,6 +34,32 @@ export default tseslint.config(
     rules: reactHooks.configs.recommended.rules,
   },
   {
+    // One-way imports in the desk: shared code (components, lib, config) → features → app.
+    files: ['apps/web/src/{components,lib,config}/**/*.{ts,tsx}'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: ['@/features/*', '@/app/*'],
+              message: 'Shared code may not import features or the app.',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    files: ['apps/web/src/features/**/*.{ts,tsx}'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['@/app/*'], message: 'Features may not import the app layer.' }] },
+      ],
+    },
+  },
+  {
     // Jest reads its configuration as CommonJS.
     files: ['apps/api/jest.config.js', 'apps/api/test/jest-e2e.config.js'],
     languageOptions: { sourceType: 'commonjs' },

@@ -1,6 +1,5 @@
 import { roleLabels } from '@skyledger/contracts';
 import { newsroom } from '@skyledger/seeds-demo/newsroom';
-import { type ChildProcess } from 'node:child_process';
 import { join } from 'node:path';
 import { apiDir, migrationArgs, startApi } from './api-server.js';
 import { appEnv } from './app-env.js';
@@ -47,19 +46,18 @@ export async function startStack(): Promise<number> {
     started.push({ name: 'the API', stop: () => stopService(api, 'the API') });
 
     printBanner();
-    const apiExited = new Promise<number>((resolve) => exitOf(api, () => resolve(stopAll(1))));
+    const apiExited = new Promise<number>((resolve) =>
+      api.once('exit', (code) => {
+        if (stopping) return;
+        console.error(`The API stopped unexpectedly (exit ${code}).`);
+        resolve(stopAll(1));
+      }),
+    );
     return await Promise.race([interrupted, apiExited]);
   } catch (error) {
     await stopAll(1);
     throw error;
   }
-}
-
-function exitOf(child: ChildProcess, onExit: () => void): void {
-  child.once('exit', (code) => {
-    if (code !== 0) console.error(`The API stopped unexpectedly (exit ${code}).`);
-    onExit();
-  });
 }
 
 function printBanner(): void {

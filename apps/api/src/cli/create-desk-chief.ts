@@ -1,6 +1,7 @@
 import 'reflect-metadata';
 import { randomBytes } from 'node:crypto';
 import { parseArgs } from 'node:util';
+import { isEmail } from 'class-validator';
 import { UsersService } from '../users/users.service';
 import { createCliContext } from './cli-context';
 
@@ -18,6 +19,7 @@ async function main(): Promise<void> {
       'Usage: npm run create-desk-chief -w apps/api -- --email <e-mail> --name "<display name>" [--password <password>]',
     );
   }
+  if (!isEmail(values.email)) throw new Error('--email must be an e-mail address');
   const password = values.password ?? randomBytes(15).toString('base64url');
   if (password.length < 12) throw new Error('--password must be at least 12 characters');
   const context = await createCliContext();
