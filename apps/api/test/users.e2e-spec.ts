@@ -60,15 +60,11 @@ describe('people and roles', () => {
   });
 
   it('invites by e-mail; the link shows the invitation and sets a password once', async () => {
-    const invited = await t
-      .http()
-      .post('/api/users/invitations')
-      .set(as('desk_chief'))
-      .send({
-        email: 'New.Editor@Users.test',
-        displayName: 'Noor Halloway',
-        role: 'science_editor',
-      });
+    const invited = await t.http().post('/api/users/invitations').set(as('desk_chief')).send({
+      email: 'New.Editor@Users.test',
+      displayName: 'Noor Halloway',
+      role: 'science_editor',
+    });
     expect(invited.status).toBe(201);
     expect(invited.body).toMatchObject({
       email: 'new.editor@users.test',
