@@ -1,4 +1,3 @@
-import { roleLabels } from '@skyledger/contracts';
 import { newsroom } from '@skyledger/seeds-demo/newsroom';
 import { join } from 'node:path';
 import { apiDir, migrationArgs, startApi } from './api-server.js';
@@ -45,7 +44,7 @@ export async function startStack(): Promise<number> {
     const api = await startApi(env, ports.app);
     started.push({ name: 'the API', stop: () => stopService(api, 'the API') });
 
-    printBanner();
+    await printBanner();
     const apiExited = new Promise<number>((resolve) =>
       api.once('exit', (code) => {
         if (stopping) return;
@@ -60,7 +59,10 @@ export async function startStack(): Promise<number> {
   }
 }
 
-function printBanner(): void {
+async function printBanner(): Promise<void> {
+  // Imported here, not at the top: the dev stack starts before the first build, and the
+  // contracts package is read from its build.
+  const { roleLabels } = await import('@skyledger/contracts');
   const line = '─'.repeat(64);
   console.info(`
 ${line}
