@@ -1,8 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import {
   desktop,
   expectAccessible,
   openBrowser,
+  useBrowser,
   phone,
   screenshot,
   type Browser,
@@ -11,12 +12,11 @@ import { demo, demoPassword, navLinks, signIn } from './support/desk';
 import { linkTo, waitForMail } from './support/mailbox';
 
 describe('people and invitations', () => {
+  const openedBrowser = useBrowser();
   let browser: Browser;
-
-  beforeAll(async () => {
-    browser = await openBrowser();
+  beforeEach(() => {
+    browser = openedBrowser();
   });
-  afterAll(() => browser.close());
 
   it('shows the desk chief a sortable People page that passes axe at both widths', async () => {
     for (const [name, viewport] of [

@@ -1,9 +1,9 @@
 import { roles, type Role } from '@skyledger/contracts';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import {
   desktop,
   expectAccessible,
-  openBrowser,
+  useBrowser,
   phone,
   screenshot,
   type Browser,
@@ -11,12 +11,11 @@ import {
 import { demo, navLinks, signIn } from './support/desk';
 
 describe('signing in to the desk', () => {
+  const openedBrowser = useBrowser();
   let browser: Browser;
-
-  beforeAll(async () => {
-    browser = await openBrowser();
+  beforeEach(() => {
+    browser = openedBrowser();
   });
-  afterAll(() => browser.close());
 
   it('sends a signed-out visitor to the sign-in page, which passes axe at both widths', async () => {
     for (const [name, viewport] of [

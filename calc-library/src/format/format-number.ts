@@ -1,16 +1,4 @@
-const superscripts: Readonly<Record<string, string>> = {
-  '0': '⁰',
-  '1': '¹',
-  '2': '²',
-  '3': '³',
-  '4': '⁴',
-  '5': '⁵',
-  '6': '⁶',
-  '7': '⁷',
-  '8': '⁸',
-  '9': '⁹',
-  '-': '⁻',
-};
+import { superscript } from './superscript.js';
 
 function trimTrailingZeros(text: string): string {
   return text.includes('.') ? text.replace(/\.?0+$/, '') : text;
@@ -37,9 +25,7 @@ export function formatNumber(value: number, significantDigits = 4): string {
   let text: string;
   if (magnitude >= 1e6 || magnitude < 1e-3) {
     const [mantissa = '', exponent = ''] = value.toExponential(significantDigits - 1).split('e');
-    const power = [...String(Number(exponent))]
-      .map((character) => superscripts[character] ?? character)
-      .join('');
+    const power = superscript(String(Number(exponent)));
     text = `${trimTrailingZeros(mantissa)} × 10${power}`;
   } else if (magnitude >= 10 ** significantDigits) {
     text = String(Math.round(value));

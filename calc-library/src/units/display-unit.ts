@@ -1,16 +1,4 @@
-const superscriptDigits: Readonly<Record<string, string>> = {
-  '0': '⁰',
-  '1': '¹',
-  '2': '²',
-  '3': '³',
-  '4': '⁴',
-  '5': '⁵',
-  '6': '⁶',
-  '7': '⁷',
-  '8': '⁸',
-  '9': '⁹',
-  '-': '⁻',
-};
+import { superscript } from '../format/superscript.js';
 
 /**
  * Writes a unit for readers: powers as superscripts, degrees with their sign.
@@ -23,9 +11,7 @@ const superscriptDigits: Readonly<Record<string, string>> = {
  */
 export function displayUnit(unit: string): string {
   return unit
-    .replace(/\^(-?\d+)/g, (_match, power: string) =>
-      [...power].map((character) => superscriptDigits[character] ?? character).join(''),
-    )
+    .replace(/\^(-?\d+)/g, (_match, power: string) => superscript(power))
     .replace(/\bdegC\b/g, '°C')
     .replace(/\bdegF\b/g, '°F');
 }

@@ -3,7 +3,7 @@ import { tmpDir } from '@skyledger/devstack';
 import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
-import { expect, inject } from 'vitest';
+import { afterAll, beforeAll, expect, inject } from 'vitest';
 
 export const desktop = { width: 1280, height: 860 };
 export const phone = { width: 375, height: 740 };
@@ -70,4 +70,17 @@ export async function expectAccessible(page: Page): Promise<void> {
 
 export async function screenshot(page: Page, name: string): Promise<void> {
   await page.screenshot({ path: join(screenshotDir, `${name}.png`), fullPage: true });
+}
+
+/** Opens one browser for the enclosing suite and closes it after; call inside `describe`. */
+export function useBrowser(): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await openBrowser();
+  });
+  afterAll(() => browser?.close());
+  return () => {
+    if (!browser) throw new Error('the browser is not open yet');
+    return browser;
+  };
 }

@@ -1,12 +1,11 @@
-import { Button, Card, DataList, Flex, Heading, Text } from '@radix-ui/themes';
+import { Card, DataList, Flex, Heading, Text } from '@radix-ui/themes';
 import { roleLabels, userStatusLabels } from '@skyledger/contracts';
 import { DocumentTitle } from '@/components/ui/document-title';
 import { useCurrentUser } from '@/features/auth/current-user';
-import { useSignOut } from '@/features/auth/api/sign-out';
+import { SignOutButton } from '@/features/auth/components/sign-out-button';
 
 export function Component() {
   const user = useCurrentUser();
-  const signOut = useSignOut();
 
   return (
     <Flex direction="column" gap="5" maxWidth="640px">
@@ -39,15 +38,7 @@ export function Component() {
         your password?&rdquo; on the sign-in page.
       </Text>
       <Flex>
-        <Button
-          variant="soft"
-          color="gray"
-          highContrast
-          loading={signOut.isPending}
-          onClick={() => signOut.mutate()}
-        >
-          Sign out
-        </Button>
+        <SignOutButton />
       </Flex>
     </Flex>
   );

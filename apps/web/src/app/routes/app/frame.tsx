@@ -1,4 +1,4 @@
-import { Button, Container, Flex, TabNav, Text } from '@radix-ui/themes';
+import { Container, Flex, TabNav, Text } from '@radix-ui/themes';
 import { roleLabels } from '@skyledger/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import {
@@ -12,7 +12,7 @@ import {
 import { Wordmark } from '@/components/ui/wordmark';
 import { paths } from '@/config/paths';
 import { sessionQueryOptions, useSession } from '@/features/auth/api/get-session';
-import { useSignOut } from '@/features/auth/api/sign-out';
+import { SignOutButton } from '@/features/auth/components/sign-out-button';
 import { CurrentUserProvider } from '@/features/auth/current-user';
 import { navItemsFor } from '../../nav-items';
 
@@ -35,7 +35,6 @@ export function Component() {
   const user = useSession();
   const { pathname } = useLocation();
   const navigation = useNavigation();
-  const signOut = useSignOut();
 
   // Only between a session ending and the move to the sign-in page.
   if (!user) return null;
@@ -61,15 +60,7 @@ export function Component() {
                   {roleLabels[user.role]}
                 </Text>
               </Flex>
-              <Button
-                variant="soft"
-                color="gray"
-                highContrast
-                loading={signOut.isPending}
-                onClick={() => signOut.mutate()}
-              >
-                Sign out
-              </Button>
+              <SignOutButton />
             </Flex>
           </Flex>
           <TabNav.Root aria-label="Desk sections" size="2">

@@ -1,4 +1,4 @@
-import { CheckCircledIcon, ExclamationTriangleIcon } from '@radix-ui/react-icons';
+import { ExclamationTriangleIcon } from '@radix-ui/react-icons';
 import { Button, Callout, DataList, Flex, Heading, Skeleton, Text } from '@radix-ui/themes';
 import { roleLabels } from '@skyledger/contracts';
 import { Link as RouterLink } from 'react-router-dom';
@@ -10,6 +10,7 @@ import { useAcceptInvitation } from '../api/accept-invitation';
 import { useInvitation } from '../api/get-invitation';
 import { invitationStatusMessages } from './link-status-messages';
 import { NewPasswordForm } from './new-password-form';
+import { PasswordSetNotice } from './password-set-notice';
 
 function LinkProblem({ message }: { message: string }) {
   return (
@@ -50,19 +51,9 @@ export function AcceptInvitation({ token }: { token: string }) {
   const { displayName, email, role, expiresAt } = invitation.data;
   if (accept.isSuccess) {
     return (
-      <Flex direction="column" gap="4">
-        <Callout.Root color="jade" role="status">
-          <Callout.Icon>
-            <CheckCircledIcon aria-hidden />
-          </Callout.Icon>
-          <Callout.Text>
-            Your password is set, {displayName}. Sign in with {email} to open the desk.
-          </Callout.Text>
-        </Callout.Root>
-        <Button asChild size="3" highContrast>
-          <RouterLink to={paths.auth.signIn.getHref()}>Sign in</RouterLink>
-        </Button>
-      </Flex>
+      <PasswordSetNotice>
+        Your password is set, {displayName}. Sign in with {email} to open the desk.
+      </PasswordSetNotice>
     );
   }
 
