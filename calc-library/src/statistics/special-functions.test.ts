@@ -55,8 +55,13 @@ describe('regularizedIncompleteBeta', () => {
         fc.double({ min: 0.2, max: 200, noNaN: true }),
         fc.double({ min: 0.2, max: 200, noNaN: true }),
         (x, a, b) => {
-          // jstat 1.9.6 ibeta, general-purpose reference library (its own accuracy is about 1e-9)
-          expectClose(regularizedIncompleteBeta(x, a, b), jStat.ibeta(x, a, b), { abs: 1e-8 });
+          // jstat 1.9.6 ibeta, general-purpose reference library. Its continued fraction stops
+          // when a step changes the result by less than 3e-7 relative (jstat src/special.js,
+          // betacf), so it is compared at that accuracy, not ours.
+          expectClose(regularizedIncompleteBeta(x, a, b), jStat.ibeta(x, a, b), {
+            rel: 1e-6,
+            abs: 1e-9,
+          });
         },
       ),
     );
