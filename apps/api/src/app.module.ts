@@ -7,7 +7,14 @@ import { LoggerModule } from 'nestjs-pino';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { AuditModule } from './audit/audit.module';
+import { AppearancesModule } from './appearances/appearances.module';
 import { AuthModule } from './auth/auth.module';
+import { ClaimantsModule } from './claimants/claimants.module';
+import { ClaimsModule } from './claims/claims.module';
+import { CommentsModule } from './comments/comments.module';
+import { ConsultationsModule } from './consultations/consultations.module';
+import { ReplyAttemptsModule } from './reply-attempts/reply-attempts.module';
+import { SourcesModule } from './sources/sources.module';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { RolesGuard } from './common/guards/roles.guard';
@@ -74,6 +81,13 @@ export class AppModule {
         UsersModule,
         AuthModule,
         HealthModule,
+        ClaimantsModule,
+        ClaimsModule,
+        AppearancesModule,
+        SourcesModule,
+        ReplyAttemptsModule,
+        ConsultationsModule,
+        CommentsModule,
       ],
       providers: [
         { provide: APP_GUARD, useClass: JwtAuthGuard },

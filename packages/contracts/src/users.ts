@@ -51,3 +51,10 @@ export interface UsersListResponse {
   items: UserListItem[];
   total: number;
 }
+
+/** An active person on the desk, for assignee pickers and filters (`GET /api/people`). */
+export interface DeskPerson {
+  id: string;
+  displayName: string;
+  role: Role;
+}

@@ -1,8 +1,34 @@
+import { Appearance } from '../appearances/entities/appearance.entity';
+import { Attachment } from '../attachments/entities/attachment.entity';
 import { AuditEvent } from '../audit/entities/audit-event.entity';
 import { RefreshToken } from '../auth/entities/refresh-token.entity';
+import { Claimant } from '../claimants/entities/claimant.entity';
+import { ClaimTopic } from '../claims/entities/claim-topic.entity';
+import { Claim } from '../claims/entities/claim.entity';
+import { Comment } from '../comments/entities/comment.entity';
+import { ExpertConsultation } from '../consultations/entities/expert-consultation.entity';
 import { OutboxMessage } from '../mail/entities/outbox-message.entity';
+import { ReplyAttempt } from '../reply-attempts/entities/reply-attempt.entity';
+import { ClaimSource } from '../sources/entities/claim-source.entity';
+import { Source } from '../sources/entities/source.entity';
 import { OneTimeToken } from '../users/entities/one-time-token.entity';
 import { User } from '../users/entities/user.entity';
 
 /** Every entity, listed once for the app and the migration CLI. */
-export const entities = [User, OneTimeToken, RefreshToken, OutboxMessage, AuditEvent];
+export const entities = [
+  User,
+  OneTimeToken,
+  RefreshToken,
+  OutboxMessage,
+  AuditEvent,
+  Claimant,
+  Claim,
+  ClaimTopic,
+  Appearance,
+  Attachment,
+  Source,
+  ClaimSource,
+  ReplyAttempt,
+  ExpertConsultation,
+  Comment,
+];

@@ -6,12 +6,13 @@ import { OneTimeToken } from './entities/one-time-token.entity';
 import { User } from './entities/user.entity';
 import { OneTimeTokensService } from './one-time-tokens.service';
 import { PasswordService } from './password.service';
+import { PeopleController } from './people.controller';
 import { UsersController } from './users.controller';
 import { UsersService } from './users.service';
 
 @Module({
   imports: [TypeOrmModule.forFeature([User, OneTimeToken]), AuditModule, MailModule],
-  controllers: [UsersController],
+  controllers: [UsersController, PeopleController],
   providers: [UsersService, OneTimeTokensService, PasswordService],
   exports: [UsersService, OneTimeTokensService, PasswordService],
 })

@@ -1,6 +1,7 @@
 import { HttpStatus, Inject, Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import {
+  type DeskPerson,
   type Role,
   type UserListItem,
   type UsersListResponse,
@@ -54,6 +55,14 @@ export class UsersService {
       .addOrderBy('user.id', 'ASC')
       .getManyAndCount();
     return { items: items.map(toUserListItem), total };
+  }
+
+  async activePeople(): Promise<DeskPerson[]> {
+    const people = await this.users.find({
+      where: { status: 'active' },
+      order: { displayName: 'ASC', id: 'ASC' },
+    });
+    return people.map(({ id, displayName, role }) => ({ id, displayName, role }));
   }
 
   async findById(id: string): Promise<User> {

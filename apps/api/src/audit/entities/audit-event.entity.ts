@@ -8,6 +8,7 @@ import { CreatedAt } from '../../database/columns';
 @Entity('audit_events')
 @Index('IDX_audit_events_entity', ['entityType', 'entityId', 'at'])
 @Index('IDX_audit_events_at', ['at'])
+@Index('IDX_audit_events_claim', ['claimId', 'at'])
 export class AuditEvent {
   @PrimaryGeneratedColumn('uuid')
   id: string;
@@ -25,6 +26,10 @@ export class AuditEvent {
 
   @Column({ name: 'entity_id', type: 'uuid' })
   entityId: string;
+
+  /** The claim this change belongs to (the claim itself or one of its parts), for its history. */
+  @Column({ name: 'claim_id', type: 'uuid', nullable: true })
+  claimId: string | null;
 
   /** What changed, as `{ field: { from, to } }` or a short free-form record. */
   @Column({ type: 'json' })

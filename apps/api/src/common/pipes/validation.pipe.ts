@@ -1,4 +1,4 @@
-import { HttpStatus, ValidationPipe, type ValidationError } from '@nestjs/common';
+import { HttpStatus, ValidationPipe, type Type, type ValidationError } from '@nestjs/common';
 import { ApiError } from '../errors/api-error';
 
 interface FieldProblem {
@@ -22,9 +22,11 @@ function collect(errors: ValidationError[], parent = ''): FieldProblem[] {
 /**
  * The global pipe: strips nothing silently (unknown fields are refused), converts
  * query strings to their declared types, and reports every broken rule by field.
+ * `expectedType` is for bodies whose type TypeScript cannot record (generic controllers).
  */
-export function createValidationPipe(): ValidationPipe {
+export function createValidationPipe(expectedType?: Type): ValidationPipe {
   return new ValidationPipe({
+    expectedType,
     whitelist: true,
     forbidNonWhitelisted: true,
     transform: true,

@@ -1,4 +1,5 @@
 import { Initial1796165154418 } from './1796165154418-Initial';
+import { ClaimsDesk1796174782267 } from './1796174782267-ClaimsDesk';
 
 /** Every migration in order, listed by class so the same list works from dist/ and under Jest. */
-export const migrations = [Initial1796165154418];
+export const migrations = [Initial1796165154418, ClaimsDesk1796174782267];

@@ -1,0 +1,23 @@
+import { type CreateClaimRequest } from '@skyledger/contracts';
+import { Type } from 'class-transformer';
+import { IsOptional, ValidateNested } from 'class-validator';
+import { CreateAppearanceDto } from '../../appearances/dto/create-appearance.dto';
+import { CreateClaimantDto } from '../../claimants/dto/create-claimant.dto';
+import { UuidField } from '../../common/validation/fields';
+import { ClaimFieldsDto } from './claim-fields.dto';
+
+/** File a claim: an existing claimant by id, or a new one, and optionally where it was seen. */
+export class CreateClaimDto extends ClaimFieldsDto implements CreateClaimRequest {
+  @UuidField({ optional: true })
+  claimantId?: string;
+
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => CreateClaimantDto)
+  claimant?: CreateClaimantDto;
+
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => CreateAppearanceDto)
+  firstAppearance?: CreateAppearanceDto;
+}

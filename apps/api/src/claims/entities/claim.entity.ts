@@ -1,0 +1,90 @@
+import {
+  claimStatuses,
+  setAsideReasons,
+  type ClaimStatus,
+  type SetAsideReason,
+} from '@skyledger/contracts';
+import {
+  Column,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  OneToMany,
+  PrimaryGeneratedColumn,
+  VersionColumn,
+} from 'typeorm';
+import { Claimant } from '../../claimants/entities/claimant.entity';
+import { CreatedAt, UpdatedAt } from '../../database/columns';
+import { User } from '../../users/entities/user.entity';
+import { ClaimTopic } from './claim-topic.entity';
+
+/**
+ * One checkable statement as said, with its neutral summary. The indexes serve the
+ * queue's common filters, each ending in the default sort (filed, newest first).
+ */
+@Entity('claims')
+@Index('IDX_claims_filed_at', ['createdAt'])
+@Index('IDX_claims_updated_at', ['updatedAt'])
+@Index('IDX_claims_status', ['status', 'createdAt'])
+@Index('IDX_claims_assignee', ['assigneeId', 'status', 'createdAt'])
+@Index('IDX_claims_filed_by', ['filedById', 'status', 'createdAt'])
+@Index('IDX_claims_claimant', ['claimantId', 'createdAt'])
+@Index('IDX_claims_legal', ['legalReview', 'status', 'createdAt'])
+export class Claim {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  /** The claim as said, word for word. */
+  @Column({ type: 'text' })
+  text: string;
+
+  @Column({ type: 'varchar', length: 75 })
+  summary: string;
+
+  @Column({ type: 'enum', enum: claimStatuses, default: 'filed' })
+  status: ClaimStatus;
+
+  @Column({ name: 'legal_review', type: 'boolean', default: false })
+  legalReview: boolean;
+
+  @Column({ name: 'claimant_id', type: 'uuid' })
+  claimantId: string;
+
+  @ManyToOne(() => Claimant, { nullable: false })
+  @JoinColumn({ name: 'claimant_id' })
+  claimant: Claimant;
+
+  @Column({ name: 'assignee_id', type: 'uuid', nullable: true })
+  assigneeId: string | null;
+
+  @ManyToOne(() => User, { nullable: true })
+  @JoinColumn({ name: 'assignee_id' })
+  assignee: User | null;
+
+  @Column({ name: 'filed_by_id', type: 'uuid' })
+  filedById: string;
+
+  @ManyToOne(() => User, { nullable: false })
+  @JoinColumn({ name: 'filed_by_id' })
+  filedBy: User;
+
+  @Column({ name: 'set_aside_reason', type: 'enum', enum: setAsideReasons, nullable: true })
+  setAsideReason: SetAsideReason | null;
+
+  @Column({ name: 'set_aside_note', type: 'text', nullable: true })
+  setAsideNote: string | null;
+
+  @OneToMany(() => ClaimTopic, (topic) => topic.claim, { cascade: ['insert'] })
+  topics: ClaimTopic[];
+
+  /** When the claim was filed. */
+  @CreatedAt()
+  createdAt: Date;
+
+  @UpdatedAt()
+  updatedAt: Date;
+
+  @VersionColumn()
+  version: number;
+}
