@@ -9,6 +9,7 @@ const esmPackages = [
   'token-types',
   '@tokenizer',
   'uint8array-extras',
+  'meilisearch',
   '@borewit',
 ];
 

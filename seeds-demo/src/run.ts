@@ -1,16 +1,15 @@
 import { SeedingContext } from '@skyledger/api/seeding';
 import { newsroom } from './newsroom';
+import { seedDemo } from './seed-demo';
 
-/** Seeds the demo newsroom. Idempotent: what exists already is left as it is. */
+/** Seeds the demo newsroom and its claims desk. Idempotent: what exists already is left as it is. */
 async function main(): Promise<void> {
   const seeding = await SeedingContext.open();
   try {
-    let created = 0;
-    for (const person of newsroom.people) {
-      if ((await seeding.person(person, newsroom.password)).created) created += 1;
-    }
+    const { people, claims } = await seedDemo(seeding);
     console.info(
-      `Demo newsroom (${newsroom.outlet}): ${created} of ${newsroom.people.length} people created, the rest already there.`,
+      `Demo newsroom (${newsroom.outlet}): ${people.created} of ${people.total} people and ` +
+        `${claims.created} of ${claims.total} claims created, the rest already there.`,
     );
   } finally {
     await seeding.close();

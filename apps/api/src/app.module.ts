@@ -14,6 +14,7 @@ import { ClaimsModule } from './claims/claims.module';
 import { CommentsModule } from './comments/comments.module';
 import { ConsultationsModule } from './consultations/consultations.module';
 import { ReplyAttemptsModule } from './reply-attempts/reply-attempts.module';
+import { SearchModule } from './search/search.module';
 import { SourcesModule } from './sources/sources.module';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
@@ -23,6 +24,7 @@ import {
   authConfig,
   databaseConfig,
   mailConfig,
+  searchConfig,
   type DatabaseConfig,
 } from './config/configuration';
 import { validateEnv } from './config/env.schema';
@@ -52,7 +54,7 @@ export function coreImports(): Array<DynamicModule | Promise<DynamicModule>> {
       // main.ts and the command-line tools load apps/api/.env themselves, before this runs.
       ignoreEnvFile: true,
       validate: validateEnv,
-      load: [appConfig, databaseConfig, authConfig, mailConfig],
+      load: [appConfig, databaseConfig, authConfig, mailConfig, searchConfig],
     }),
     LoggerModule.forRoot({
       pinoHttp: {
@@ -88,6 +90,7 @@ export class AppModule {
         ReplyAttemptsModule,
         ConsultationsModule,
         CommentsModule,
+        SearchModule,
       ],
       providers: [
         { provide: APP_GUARD, useClass: JwtAuthGuard },

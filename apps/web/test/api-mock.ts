@@ -6,11 +6,13 @@ export interface RecordedRequest {
   path: string;
   search: URLSearchParams;
   headers: Headers;
+  /** The parsed JSON, or the FormData of a multipart upload. */
   body: unknown;
 }
 
 export interface MockReply {
   status: number;
+  /** Sent as JSON, or as the bytes themselves when it is a Blob. */
   body?: unknown;
 }
 
@@ -56,12 +58,23 @@ export function mockApi(initialRoutes: Routes) {
       path: url.pathname,
       search: url.searchParams,
       headers: new Headers(init?.headers),
-      body: typeof init?.body === 'string' ? JSON.parse(init.body) : undefined,
+      body:
+        typeof init?.body === 'string'
+          ? JSON.parse(init.body)
+          : init?.body instanceof FormData
+            ? init.body
+            : undefined,
     };
     requests.push(request);
     const route = routes[`${method} ${url.pathname}`];
     if (!route) throw new Error(`Unexpected request in test: ${method} ${url.pathname}`);
     const reply = typeof route === 'function' ? await route(request) : route;
+    if (reply.body instanceof Blob) {
+      return new Response(reply.body, {
+        status: reply.status,
+        headers: { 'Content-Type': reply.body.type },
+      });
+    }
     return new Response(reply.body === undefined ? null : JSON.stringify(reply.body), {
       status: reply.status,
       headers: reply.body === undefined ? {} : { 'Content-Type': 'application/json' },

@@ -13,3 +13,4 @@ export * from './sources.js';
 export * from './reply-attempts.js';
 export * from './consultations.js';
 export * from './comments.js';
+export * from './search.js';

@@ -7,6 +7,7 @@ import { applyChanges } from '../audit/changes';
 import { type AuthenticatedUser } from '../auth/authenticated-user';
 import { ApiError } from '../common/errors/api-error';
 import { whereWordStarts } from '../common/queries/word-prefix';
+import { SearchIndexService } from '../search/search-index.service';
 import { toClaimantView } from './claimant-view';
 import { type CreateClaimantDto } from './dto/create-claimant.dto';
 import { type UpdateClaimantDto } from './dto/update-claimant.dto';
@@ -20,6 +21,7 @@ export class ClaimantsService {
     @InjectRepository(Claimant) private readonly claimants: Repository<Claimant>,
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly audit: AuditService,
+    private readonly searchIndex: SearchIndexService,
   ) {}
 
   /** Claimants whose name, or a word of it, starts with `q`; all of them A–Z without `q`. */
@@ -79,7 +81,7 @@ export class ClaimantsService {
     id: string,
     dto: UpdateClaimantDto,
   ): Promise<ClaimantView> {
-    return this.dataSource.transaction(async (manager) => {
+    const view = await this.dataSource.transaction(async (manager) => {
       const claimant = await manager.findOne(Claimant, {
         where: { id },
         lock: { mode: 'pessimistic_write' },
@@ -105,5 +107,8 @@ export class ClaimantsService {
       });
       return toClaimantView(saved);
     });
+    // The claimant's name is searched with each of their claims.
+    await this.searchIndex.claimantChanged(id);
+    return view;
   }
 }

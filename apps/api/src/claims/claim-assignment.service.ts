@@ -9,6 +9,7 @@ import { appConfig, type AppConfig } from '../config/configuration';
 import { OutboxService } from '../mail/outbox.service';
 import { OutboxWorker } from '../mail/outbox.worker';
 import { claimAssignedMail } from '../mail/templates/claim-assigned.mail';
+import { SearchIndexService } from '../search/search-index.service';
 import { User } from '../users/entities/user.entity';
 import { claimRoles, forbidden, hasRole } from './claim-policy';
 import { ClaimsService } from './claims.service';
@@ -27,6 +28,7 @@ export class ClaimAssignmentService {
     private readonly audit: AuditService,
     private readonly outbox: OutboxService,
     private readonly outboxWorker: OutboxWorker,
+    private readonly searchIndex: SearchIndexService,
     @Inject(appConfig.KEY) private readonly app: AppConfig,
   ) {}
 
@@ -85,6 +87,7 @@ export class ClaimAssignmentService {
       }
     });
     if (mailed) this.outboxWorker.nudge();
+    await this.searchIndex.claimsChanged([id]);
     return this.claims.detail(id);
   }
 

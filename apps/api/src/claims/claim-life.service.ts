@@ -11,6 +11,7 @@ import { DataSource } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { type AuthenticatedUser } from '../auth/authenticated-user';
 import { ApiError } from '../common/errors/api-error';
+import { SearchIndexService } from '../search/search-index.service';
 import { forbidden } from './claim-policy';
 import { ClaimsService } from './claims.service';
 import { type ClaimTransitionDto } from './dto/claim-transition.dto';
@@ -51,6 +52,7 @@ export class ClaimLifeService {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly claims: ClaimsService,
     private readonly audit: AuditService,
+    private readonly searchIndex: SearchIndexService,
   ) {}
 
   async transition(
@@ -94,6 +96,7 @@ export class ClaimLifeService {
         },
       });
     });
+    await this.searchIndex.claimsChanged([id]);
     return this.claims.detail(id);
   }
 }

@@ -4,11 +4,14 @@ import {
   type ClaimDetail,
   type ClaimHistoryEvent,
   type ClaimQueueResponse,
+  type SimilarClaim,
 } from '@skyledger/contracts';
 import { type AuthenticatedUser } from '../auth/authenticated-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { UuidParam } from '../common/decorators/uuid-param.decorator';
+import { SimilarClaimsQueryDto } from '../search/dto/similar-claims-query.dto';
+import { SearchService } from '../search/search.service';
 import { ClaimAssignmentService } from './claim-assignment.service';
 import { ClaimLifeService } from './claim-life.service';
 import { claimRoles } from './claim-policy';
@@ -28,6 +31,7 @@ export class ClaimsController {
     private readonly claims: ClaimsService,
     private readonly assignment: ClaimAssignmentService,
     private readonly life: ClaimLifeService,
+    private readonly search: SearchService,
   ) {}
 
   /** Files a claim, with a new or existing claimant and optionally its first appearance. */
@@ -44,6 +48,12 @@ export class ClaimsController {
     @Query() query: ClaimQueueQueryDto,
   ): Promise<ClaimQueueResponse> {
     return this.claims.queue(actor, query);
+  }
+
+  /** Earlier claims close to a text being typed, for the filing form (declared before `:id`). */
+  @Get('similar')
+  similar(@Query() query: SimilarClaimsQueryDto): Promise<SimilarClaim[]> {
+    return this.search.similarClaims(query.text);
   }
 
   /** A claim with its claimant, appearances, sources, files, reply attempts, experts and comments. */

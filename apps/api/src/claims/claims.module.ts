@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuditModule } from '../audit/audit.module';
+import { SearchModule } from '../search/search.module';
 import { ClaimantsModule } from '../claimants/claimants.module';
 import { MailModule } from '../mail/mail.module';
 import { ClaimAssignmentService } from './claim-assignment.service';
@@ -12,7 +13,13 @@ import { ClaimsService } from './claims.service';
 import { Claim } from './entities/claim.entity';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([Claim]), AuditModule, MailModule, ClaimantsModule],
+  imports: [
+    TypeOrmModule.forFeature([Claim]),
+    AuditModule,
+    SearchModule,
+    MailModule,
+    ClaimantsModule,
+  ],
   controllers: [ClaimsController],
   providers: [
     ClaimsService,

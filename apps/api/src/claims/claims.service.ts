@@ -18,6 +18,7 @@ import { type AuthenticatedUser } from '../auth/authenticated-user';
 import { ClaimantsService } from '../claimants/claimants.service';
 import { ApiError } from '../common/errors/api-error';
 import { assertExactlyOne } from '../common/validation/exactly-one';
+import { SearchIndexService } from '../search/search-index.service';
 import { User } from '../users/entities/user.entity';
 import { ClaimDetailsReader } from './claim-details.reader';
 import { claimNotFound } from './claim-not-found';
@@ -38,6 +39,7 @@ export class ClaimsService {
     private readonly audit: AuditService,
     private readonly claimants: ClaimantsService,
     private readonly details: ClaimDetailsReader,
+    private readonly searchIndex: SearchIndexService,
   ) {}
 
   async file(actor: AuthenticatedUser, dto: CreateClaimDto): Promise<ClaimDetail> {
@@ -92,6 +94,7 @@ export class ClaimsService {
       }
       return claim.id;
     });
+    await this.searchIndex.claimsChanged([id]);
     return this.detail(id);
   }
 
@@ -171,6 +174,7 @@ export class ClaimsService {
         summary: changes,
       });
     });
+    await this.searchIndex.claimsChanged([id]);
     return this.detail(id);
   }
 

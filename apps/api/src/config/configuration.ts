@@ -61,7 +61,16 @@ export const mailConfig = registerAs('mail', () => {
   };
 });
 
+export const searchConfig = registerAs('search', () => {
+  const env = validateEnv(process.env);
+  return {
+    engine: env.SEARCH_ENGINE,
+    meilisearch: { host: env.MEILI_HOST ?? '', apiKey: env.MEILI_API_KEY, index: env.MEILI_INDEX },
+  };
+});
+
 export type AppConfig = ConfigType<typeof appConfig>;
 export type DatabaseConfig = ConfigType<typeof databaseConfig>;
 export type AuthConfig = ConfigType<typeof authConfig>;
 export type MailConfig = ConfigType<typeof mailConfig>;
+export type SearchConfig = ConfigType<typeof searchConfig>;

@@ -17,36 +17,51 @@ export const databaseEnvSchema = z.object({
   DB_NAME: z.string().min(1).default('skyledger'),
 });
 
-export const envSchema = databaseEnvSchema.extend({
-  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
-  HOST: z.string().min(1).default('127.0.0.1'),
-  PORT: int(0, 65535).default(3000),
-  APP_URL: z.url().default('http://127.0.0.1:3000'),
-  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
-  WEB_DIST_DIR: z.string().optional(),
+export const envSchema = databaseEnvSchema
+  .extend({
+    NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+    HOST: z.string().min(1).default('127.0.0.1'),
+    PORT: int(0, 65535).default(3000),
+    APP_URL: z.url().default('http://127.0.0.1:3000'),
+    LOG_LEVEL: z
+      .enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'])
+      .default('info'),
+    WEB_DIST_DIR: z.string().optional(),
 
-  JWT_SECRET: z.string().min(32, { error: 'must be at least 32 characters' }),
-  JWT_ACCESS_TTL_SECONDS: int(30, 86_400).default(900),
-  REFRESH_TTL_DAYS: int(1, 365).default(14),
-  REFRESH_REUSE_GRACE_SECONDS: int(0, 300).default(10),
-  COOKIE_SECURE: bool.default(false),
-  AUTH_RATE_LIMIT_PER_MINUTE: int(1, 100_000).default(10),
-  LOCKOUT_THRESHOLD: int(1, 100).default(5),
-  LOCKOUT_MINUTES: int(1, 1440).default(15),
-  INVITE_TTL_HOURS: int(1, 720).default(72),
-  PASSWORD_RESET_TTL_MINUTES: int(5, 1440).default(60),
+    JWT_SECRET: z.string().min(32, { error: 'must be at least 32 characters' }),
+    JWT_ACCESS_TTL_SECONDS: int(30, 86_400).default(900),
+    REFRESH_TTL_DAYS: int(1, 365).default(14),
+    REFRESH_REUSE_GRACE_SECONDS: int(0, 300).default(10),
+    COOKIE_SECURE: bool.default(false),
+    AUTH_RATE_LIMIT_PER_MINUTE: int(1, 100_000).default(10),
+    LOCKOUT_THRESHOLD: int(1, 100).default(5),
+    LOCKOUT_MINUTES: int(1, 1440).default(15),
+    INVITE_TTL_HOURS: int(1, 720).default(72),
+    PASSWORD_RESET_TTL_MINUTES: int(5, 1440).default(60),
 
-  SMTP_HOST: z.string().min(1).default('127.0.0.1'),
-  SMTP_PORT: int(1, 65535).default(1025),
-  SMTP_SECURE: bool.default(false),
-  SMTP_USER: z.string().optional(),
-  SMTP_PASSWORD: z.string().optional(),
-  MAIL_FROM: z.string().min(3).default('Skyledger desk <desk@skyledger.test>'),
-  OUTBOX_WORKER_ENABLED: bool.default(true),
-  OUTBOX_POLL_MS: int(50, 600_000).default(2000),
-  OUTBOX_MAX_ATTEMPTS: int(1, 100).default(8),
-  OUTBOX_STALE_SECONDS: int(5, 86_400).default(120),
-});
+    SMTP_HOST: z.string().min(1).default('127.0.0.1'),
+    SMTP_PORT: int(1, 65535).default(1025),
+    SMTP_SECURE: bool.default(false),
+    SMTP_USER: z.string().optional(),
+    SMTP_PASSWORD: z.string().optional(),
+    MAIL_FROM: z.string().min(3).default('Skyledger desk <desk@skyledger.test>'),
+    OUTBOX_WORKER_ENABLED: bool.default(true),
+    OUTBOX_POLL_MS: int(50, 600_000).default(2000),
+    OUTBOX_MAX_ATTEMPTS: int(1, 100).default(8),
+    OUTBOX_STALE_SECONDS: int(5, 86_400).default(120),
+
+    SEARCH_ENGINE: z.enum(['embedded', 'meilisearch']).default('embedded'),
+    MEILI_HOST: z.url().optional(),
+    MEILI_API_KEY: z.string().optional(),
+    MEILI_INDEX: z
+      .string()
+      .regex(/^[A-Za-z0-9_-]+$/, { error: 'letters, digits, - and _ only' })
+      .default('skyledger'),
+  })
+  .refine((env) => env.SEARCH_ENGINE !== 'meilisearch' || env.MEILI_HOST, {
+    error: 'is required when SEARCH_ENGINE is meilisearch',
+    path: ['MEILI_HOST'],
+  });
 
 export type Env = z.infer<typeof envSchema>;
 

@@ -1,8 +1,13 @@
 import 'reflect-metadata';
 import { type INestApplicationContext } from '@nestjs/common';
+import { NestFactory } from '@nestjs/core';
 import { type Role } from '@skyledger/contracts';
-import { createCliContext } from '../cli/cli-context';
+import { loadEnvFile } from '../config/load-env-file';
 import { UsersService } from '../users/users.service';
+import { ClaimSeeder, type SeedClaim } from './claim-seeder';
+import { SeedingModule } from './seeding.module';
+
+export type { SeedClaim, SeedFile } from './claim-seeder';
 
 export interface SeedPerson {
   email: string;
@@ -13,13 +18,21 @@ export interface SeedPerson {
 /**
  * What the demo seed (seeds-demo) may do to the database, through the same services the
  * API uses, so seeded data obeys the same rules. Every method is idempotent, keyed by a
- * natural id (e-mail for people): what exists already is left alone.
+ * natural id (e-mail for people, the summary for claims): what exists already is left alone.
  */
 export class SeedingContext {
   private constructor(private readonly context: INestApplicationContext) {}
 
+  /** Mail is only queued, never sent from here: the API's outbox worker delivers it. */
   static async open(): Promise<SeedingContext> {
-    return new SeedingContext(await createCliContext());
+    loadEnvFile();
+    process.env.OUTBOX_WORKER_ENABLED = 'false';
+    process.env.LOG_LEVEL ??= 'warn';
+    return new SeedingContext(
+      await NestFactory.createApplicationContext(SeedingModule.forRoot(), {
+        logger: ['error', 'warn'],
+      }),
+    );
   }
 
   async person(person: SeedPerson, password: string): Promise<{ id: string; created: boolean }> {
@@ -30,6 +43,11 @@ export class SeedingContext {
     if (existing) return { id: existing.id, created: false };
     const user = await users.upsertActiveUser({ ...person, password });
     return { id: user.id, created: true };
+  }
+
+  /** Files a claim and does to it what the spec says, unless one with its summary exists. */
+  claim(claim: SeedClaim): Promise<{ id: string; created: boolean }> {
+    return new ClaimSeeder(this.context).seed(claim);
   }
 
   close(): Promise<void> {

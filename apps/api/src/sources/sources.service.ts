@@ -10,6 +10,7 @@ import { ClaimsService } from '../claims/claims.service';
 import { ApiError } from '../common/errors/api-error';
 import { whereWordStarts } from '../common/queries/word-prefix';
 import { assertExactlyOne } from '../common/validation/exactly-one';
+import { SearchIndexService } from '../search/search-index.service';
 import { type CreateSourceDto } from './dto/create-source.dto';
 import { type LinkSourceDto } from './dto/link-source.dto';
 import { type UpdateSourceDto } from './dto/update-source.dto';
@@ -34,6 +35,7 @@ export class SourcesService {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly claims: ClaimsService,
     private readonly audit: AuditService,
+    private readonly searchIndex: SearchIndexService,
   ) {}
 
   async search(q: string | undefined): Promise<SourceView[]> {
@@ -83,6 +85,7 @@ export class SourcesService {
       });
       return source.id;
     });
+    await this.searchIndex.sourcesChanged([sourceId]);
     const link = await this.dataSource.manager.findOneOrFail(ClaimSource, {
       where: { claimId, sourceId },
       relations: { source: { createdBy: true }, linkedBy: true },
@@ -135,6 +138,7 @@ export class SourcesService {
         summary: changes,
       });
     });
+    await this.searchIndex.sourcesChanged([id]);
     return toSourceView(
       await this.sources.findOneOrFail({ where: { id }, relations: { createdBy: true } }),
     );

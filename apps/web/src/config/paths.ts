@@ -18,6 +18,20 @@ export const paths = {
   },
   app: {
     desk: { path: '/', getHref: () => '/' },
+    queue: {
+      path: '/claims',
+      /** The queue; `search` holds its filters, as the queue writes them into the URL. */
+      getHref: (search?: URLSearchParams | string) => {
+        const query = search?.toString();
+        return query ? `/claims?${query}` : '/claims';
+      },
+    },
+    fileClaim: { path: '/claims/new', getHref: () => '/claims/new' },
+    claim: {
+      path: '/claims/:claimId',
+      getHref: (claimId: string, section?: string) =>
+        `/claims/${encodeURIComponent(claimId)}${section ? `#${section}` : ''}`,
+    },
     people: { path: '/people', getHref: () => '/people' },
     account: { path: '/account', getHref: () => '/account' },
   },

@@ -22,7 +22,10 @@ type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 
 export interface RequestOptions {
   method?: Method;
+  /** JSON-encoded, except FormData, which goes as multipart with the browser's boundary. */
   body?: unknown;
+  /** How to read a successful answer: JSON (default) or the raw bytes, e.g. a file. */
+  responseType?: 'json' | 'blob';
   /** Query string parameters; undefined values are left out. */
   params?: Record<string, string | number | undefined>;
   /** Send the access token and refresh it on a 401 (default true). */
@@ -78,14 +81,21 @@ async function send(
   options: RequestOptions,
   token: string | null,
 ): Promise<Response> {
-  const headers = new Headers({ Accept: 'application/json' });
-  if (options.body !== undefined) headers.set('Content-Type', 'application/json');
+  const multipart = options.body instanceof FormData;
+  const headers = new Headers({
+    Accept: options.responseType === 'blob' ? '*/*' : 'application/json',
+  });
+  if (options.body !== undefined && !multipart) headers.set('Content-Type', 'application/json');
   if (token) headers.set('Authorization', `Bearer ${token}`);
   try {
     return await fetch(buildUrl(path, options.params), {
       method: options.method ?? 'GET',
       headers,
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: multipart
+        ? (options.body as FormData)
+        : options.body === undefined
+          ? undefined
+          : JSON.stringify(options.body),
       credentials: 'same-origin',
       signal: options.signal,
     });
@@ -99,9 +109,13 @@ async function send(
   }
 }
 
-async function parse<T>(response: Response): Promise<T> {
+async function parse<T>(
+  response: Response,
+  responseType: RequestOptions['responseType'],
+): Promise<T> {
   if (!response.ok) throw await toApiError(response);
   if (response.status === 204 || response.status === 202) return undefined as T;
+  if (responseType === 'blob') return (await response.blob()) as T;
   const text = await response.text();
   return (text ? JSON.parse(text) : undefined) as T;
 }
@@ -113,7 +127,7 @@ async function parse<T>(response: Response): Promise<T> {
  */
 export function refreshSession(): Promise<SessionResponse> {
   refreshInFlight ??= send('/auth/refresh', { method: 'POST' }, null)
-    .then((response) => parse<SessionResponse>(response))
+    .then((response) => parse<SessionResponse>(response, 'json'))
     .then((session) => {
       accessToken = session.accessToken;
       return session;
@@ -128,7 +142,7 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
   const auth = options.auth ?? true;
   const tokenSent = auth ? accessToken : null;
   const response = await send(path, options, tokenSent);
-  if (response.status !== 401 || !auth) return parse<T>(response);
+  if (response.status !== 401 || !auth) return parse<T>(response, options.responseType);
 
   // A request that raced another one's refresh already has a fresh token to retry with.
   if (accessToken === tokenSent || accessToken === null) {
@@ -145,7 +159,7 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
     accessToken = null;
     sessionEvents.onExpired();
   }
-  return parse<T>(retried);
+  return parse<T>(retried, options.responseType);
 }
 
 export const api = {
@@ -155,4 +169,8 @@ export const api = {
     apiRequest<T>(path, { ...options, method: 'POST', body }),
   patch: <T>(path: string, body: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
     apiRequest<T>(path, { ...options, method: 'PATCH', body }),
+  delete: (path: string) => apiRequest<void>(path, { method: 'DELETE' }),
+  /** The bytes at a path, with the bearer token: for files that an <img src> could not fetch. */
+  blob: (path: string, options?: Pick<RequestOptions, 'signal'>) =>
+    apiRequest<Blob>(path, { ...options, method: 'GET', responseType: 'blob' }),
 };

@@ -13,6 +13,21 @@ const fieldCodeMessages: Record<string, string> = {
   stale: 'Someone else changed this meanwhile',
   lastDeskChief: 'The desk needs at least one active desk chief',
   self: "You can't do this to your own account",
+  isUrl: 'Enter a web address starting with http:// or https://',
+  isISO8601: 'Enter a date and time',
+  matches: 'Enter this in the form shown',
+  isDateString: 'Enter a date',
+  isTimeZone: 'Choose a time zone from the list',
+  isUUID: 'Choose one from the list',
+  isBoolean: 'Choose yes or no',
+  isInt: 'Enter a whole number',
+  min: 'This number is too small',
+  max: 'This number is too large',
+  required: 'This is required',
+  notFound: 'This no longer exists on the desk; choose again',
+  notAllowed: 'This cannot be sent here',
+  alreadyLinked: 'This source is already cited for this claim',
+  notAssignable: 'This person cannot research claims',
 };
 
 /** Field-specific wording where the generic words would be vague. */
@@ -43,4 +58,19 @@ export function errorMessage(error: unknown): string {
       }
       return error.message;
   }
+}
+
+/**
+ * Words for a failed change: the stale-version sentence the screen chose, the first broken
+ * rule in words, or what `errorMessage` says.
+ */
+export function changeErrorMessage(error: unknown, staleMessage: string): string {
+  if (isApiError(error) && error.status === 409 && error.body.fields?.version === 'stale') {
+    return staleMessage;
+  }
+  const firstField = isApiError(error) ? Object.entries(error.body.fields ?? {})[0] : undefined;
+  if (isApiError(error) && firstField) {
+    return fieldErrorMessage(firstField[0], firstField[1], error.message);
+  }
+  return errorMessage(error);
 }

@@ -8,6 +8,11 @@ export interface ApplyApiErrorOptions<T extends FieldValues> {
   overrides?: FieldCodeOverrides;
   /** A sentence for a status that means something particular on this form (e.g. 410). */
   statusMessages?: Partial<Record<number, string>>;
+  /**
+   * Where an API field shows on this form when the form names it otherwise, e.g.
+   * `firstAppearance.seenAt` → `firstAppearance.seenAtLocal`; `topics.2` → `topics`.
+   */
+  formField?: (apiField: string) => string;
 }
 
 /**
@@ -17,10 +22,14 @@ export interface ApplyApiErrorOptions<T extends FieldValues> {
 export function applyApiError<T extends FieldValues>(
   error: unknown,
   setError: UseFormSetError<T>,
-  { fields, overrides, statusMessages }: ApplyApiErrorOptions<T>,
+  { fields, overrides, statusMessages, formField = (field) => field }: ApplyApiErrorOptions<T>,
 ): void {
   const known: readonly string[] = fields;
-  const fieldErrors = isApiError(error) ? Object.entries(error.body.fields ?? {}) : [];
+  const fieldErrors = isApiError(error)
+    ? Object.entries(error.body.fields ?? {}).map(
+        ([field, code]) => [formField(field), code] as const,
+      )
+    : [];
   const placed = fieldErrors.filter(([field]) => known.includes(field));
 
   placed.forEach(([field, code], index) => {

@@ -1,0 +1,74 @@
+import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
+import { SearchDocumentsReader } from './search-documents.reader';
+import { documentId, type SearchDocument } from './search-document';
+import { SearchEngine } from './search-engine';
+
+/**
+ * Keeps the search engine in step with MariaDB. Services call it after their transaction
+ * commits, within the same request, so a write is searchable as soon as it is answered.
+ * A failure to index is logged, not thrown: the write stands, and a rebuild mends it.
+ */
+@Injectable()
+export class SearchIndexService implements OnApplicationBootstrap {
+  private readonly logger = new Logger(SearchIndexService.name);
+
+  constructor(
+    private readonly engine: SearchEngine,
+    private readonly documents: SearchDocumentsReader,
+  ) {}
+
+  async onApplicationBootstrap(): Promise<void> {
+    await this.engine.start();
+    // A shared engine keeps its index between boots; several API instances must not all
+    // rebuild it. It is built when empty, and by `npm run search:reindex` otherwise.
+    if (this.engine.persistent && (await this.engine.count()) > 0) return;
+    const started = Date.now();
+    const count = await this.rebuild();
+    this.logger.log(`Search index built: ${count} documents in ${Date.now() - started} ms`);
+  }
+
+  /** Reads every document from MariaDB and replaces the index with them. */
+  async rebuild(): Promise<number> {
+    const all: SearchDocument[] = [];
+    for await (const batch of this.documents.all()) all.push(...batch);
+    await this.engine.replaceAll(all);
+    return all.length;
+  }
+
+  claimsChanged(ids: string[]): Promise<void> {
+    return this.refresh('claim', ids, () => this.documents.claims(ids));
+  }
+
+  claimantChanged(claimantId: string): Promise<void> {
+    return this.safely(async () =>
+      this.engine.upsert(await this.documents.claimsOfClaimant(claimantId)),
+    );
+  }
+
+  sourcesChanged(ids: string[]): Promise<void> {
+    return this.refresh('source', ids, () => this.documents.sources(ids));
+  }
+
+  /** Upserts what still exists and removes what is gone. */
+  private refresh(
+    type: SearchDocument['type'],
+    ids: string[],
+    read: () => Promise<SearchDocument[]>,
+  ): Promise<void> {
+    return this.safely(async () => {
+      const found = await read();
+      const present = new Set(found.map((document) => document.entityId));
+      await this.engine.upsert(found);
+      const gone = ids.filter((id) => !present.has(id)).map((id) => documentId(type, id));
+      if (gone.length) await this.engine.remove(gone);
+    });
+  }
+
+  private async safely(work: () => Promise<void>): Promise<void> {
+    try {
+      await work();
+    } catch (error) {
+      this.logger.error(`Search index not updated; run a reindex: ${String(error)}`);
+    }
+  }
+}

@@ -1,0 +1,17 @@
+import { Module, type DynamicModule } from '@nestjs/common';
+import { coreImports } from '../app.module';
+import { ClaimantsModule } from '../claimants/claimants.module';
+import { ClaimsModule } from '../claims/claims.module';
+import { SourcesModule } from '../sources/sources.module';
+import { UsersModule } from '../users/users.module';
+
+/** The services the demo seed goes through: people, and the claims desk. No HTTP. */
+@Module({})
+export class SeedingModule {
+  static forRoot(): DynamicModule {
+    return {
+      module: SeedingModule,
+      imports: [...coreImports(), UsersModule, ClaimantsModule, ClaimsModule, SourcesModule],
+    };
+  }
+}

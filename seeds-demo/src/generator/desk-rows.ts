@@ -1,0 +1,219 @@
+import {
+  type ClaimantKind,
+  type ClaimStatus,
+  type Role,
+  type SetAsideReason,
+} from '@skyledger/contracts';
+import { SeededRandom } from './random';
+import {
+  claimPatterns,
+  extraTopics,
+  familyNames,
+  givenNames,
+  organisationForms,
+  places,
+  publicTitles,
+} from './vocabulary';
+
+export interface PersonRow {
+  id: string;
+  email: string;
+  displayName: string;
+  role: Role;
+}
+
+export interface ClaimantRow {
+  id: string;
+  name: string;
+  kind: ClaimantKind;
+  affiliation: string | null;
+  notes: string;
+}
+
+export interface ClaimRow {
+  id: string;
+  text: string;
+  summary: string;
+  status: ClaimStatus;
+  legalReview: boolean;
+  claimantId: string;
+  assigneeId: string | null;
+  filedById: string;
+  setAsideReason: SetAsideReason | null;
+  createdAt: Date;
+  updatedAt: Date;
+  version: number;
+}
+
+export interface TopicRow {
+  claimId: string;
+  topic: string;
+}
+
+const DAY_MS = 86_400_000;
+
+/** The statuses a claim of this age is likely to have reached: new ones open, old ones done. */
+function statusWeights(ageDays: number): Record<ClaimStatus, number> {
+  if (ageDays < 14) {
+    return {
+      filed: 45,
+      in_research: 40,
+      awaiting_signoff: 8,
+      sent_back: 3,
+      cleared: 0,
+      published: 0,
+      set_aside: 4,
+    };
+  }
+  if (ageDays < 90) {
+    return {
+      filed: 8,
+      in_research: 30,
+      awaiting_signoff: 10,
+      sent_back: 5,
+      cleared: 7,
+      published: 25,
+      set_aside: 15,
+    };
+  }
+  return {
+    filed: 1,
+    in_research: 2,
+    awaiting_signoff: 0.5,
+    sent_back: 0.5,
+    cleared: 1,
+    published: 70,
+    set_aside: 25,
+  };
+}
+
+/** The invented desk that files and researches generated claims: fixed e-mails, seeded ids. */
+export function benchPeople(random: SeededRandom): PersonRow[] {
+  const roster: Array<[Role, number]> = [
+    ['reporter', 8],
+    ['science_editor', 6],
+    ['copy_desk', 2],
+    ['desk_chief', 2],
+  ];
+  const people: PersonRow[] = [];
+  for (const [role, count] of roster) {
+    for (let n = 1; n <= count; n += 1) {
+      people.push({
+        id: random.uuid(),
+        email: `${role.replace('_', '-')}-${String(n).padStart(2, '0')}@bench.marrowby-gazette.test`,
+        displayName: `${random.pick(givenNames)} ${random.pick(familyNames)}`,
+        role,
+      });
+    }
+  }
+  return people;
+}
+
+function fill(template: string, random: SeededRandom, year: number): string {
+  return template.replace('{place}', random.pick(places)).replace('{year}', String(year));
+}
+
+export function claimantRows(random: SeededRandom, count: number): ClaimantRow[] {
+  return Array.from({ length: count }, (_, index) => {
+    const kind = random.weighted<ClaimantKind>({
+      public_figure: 45,
+      organisation: 35,
+      private_individual: 20,
+    });
+    const person = `${random.pick(givenNames)} ${random.pick(familyNames)}`;
+    const name =
+      kind === 'organisation'
+        ? fill(random.pick(organisationForms), random, 0)
+        : kind === 'public_figure'
+          ? `${random.pick(publicTitles)} ${person}`.trim()
+          : person;
+    return {
+      id: random.uuid(),
+      // The number keeps generated names apart in search; they stay invented.
+      name: `${name} ${index + 1}`,
+      kind,
+      affiliation: kind === 'public_figure' ? `${random.pick(places)} Borough Council` : null,
+      notes: 'Generated for scale tests (seeds-demo generate-claims); invented.',
+    };
+  });
+}
+
+/**
+ * The generator's whole output as rows, a pure function of its options: the same seed
+ * gives the same rows, so the first rows can be checked without a database.
+ */
+export function* claimRows(
+  random: SeededRandom,
+  options: {
+    count: number;
+    claimants: readonly ClaimantRow[];
+    people: readonly PersonRow[];
+    /** Filing dates run from `until - years` to `until`, busier towards the end. */
+    until: Date;
+    years: number;
+  },
+): Generator<{ claim: ClaimRow; topics: TopicRow[] }> {
+  const reporters = options.people.filter((person) => person.role === 'reporter');
+  const editors = options.people.filter((person) => person.role === 'science_editor');
+  const chiefs = options.people.filter((person) => person.role === 'desk_chief');
+  if (reporters.length === 0 || editors.length === 0 || chiefs.length === 0) {
+    throw new Error('generateClaims needs at least one reporter, science editor and desk chief');
+  }
+  const patternWeights = Object.fromEntries(
+    claimPatterns.map((pattern, index) => [String(index), pattern.weight]),
+  );
+  const span = options.years * 365 * DAY_MS;
+  const end = options.until.getTime();
+  for (let n = 0; n < options.count; n += 1) {
+    // sqrt(u) has density 2u: the desk files more claims every year.
+    const createdAt = new Date(Math.floor(end - span + span * Math.sqrt(random.next())));
+    const ageDays = (end - createdAt.getTime()) / DAY_MS;
+    const status = random.weighted(statusWeights(ageDays));
+    const claimant = options.claimants[random.skewedIndex(options.claimants.length)]!;
+    const pattern = claimPatterns[Number(random.weighted(patternWeights))]!;
+    const year = createdAt.getUTCFullYear() - 1 - random.below(12);
+    const place = random.pick(places);
+    const fillIn = (template: string) =>
+      template.replaceAll('{place}', place).replaceAll('{year}', String(year));
+
+    const researched = status !== 'filed' && (status !== 'set_aside' || random.chance(0.5));
+    const assignee = researched
+      ? random.chance(0.1)
+        ? random.pick(chiefs)
+        : editors[random.skewedIndex(editors.length, 1.6)]!
+      : null;
+    const filedBy = random.chance(0.8) ? random.pick(reporters) : random.pick(editors);
+    const legalReview = random.chance(claimant.kind === 'private_individual' ? 0.25 : 0.02);
+    const busyDays = status === 'filed' ? 2 : 60;
+    const updatedAt = new Date(
+      createdAt.getTime() + Math.floor(random.next() * Math.min(ageDays, busyDays) * DAY_MS),
+    );
+    const topics = new Set(pattern.topics);
+    if (random.chance(0.3)) topics.add(random.pick(extraTopics));
+    const id = random.uuid();
+    yield {
+      claim: {
+        id,
+        text: fillIn(pattern.text),
+        summary: fillIn(pattern.summary),
+        status,
+        legalReview,
+        claimantId: claimant.id,
+        assigneeId: assignee?.id ?? null,
+        filedById: filedBy.id,
+        setAsideReason:
+          status === 'set_aside'
+            ? random.weighted<SetAsideReason>({
+                duplicate: 50,
+                not_checkable: 30,
+                out_of_scope: 20,
+              })
+            : null,
+        createdAt,
+        updatedAt,
+        version: 1 + random.below(status === 'filed' ? 2 : 8),
+      },
+      topics: [...topics].map((topic) => ({ claimId: id, topic })),
+    };
+  }
+}

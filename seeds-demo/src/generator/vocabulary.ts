@@ -1,0 +1,223 @@
+/**
+ * What generated claims are made of: claim patterns on the PRODUCT.md topics, invented
+ * names and places. Generated rows are for scale tests and the benchmark, never the demo.
+ */
+export interface ClaimPattern {
+  summary: string;
+  text: string;
+  topics: readonly string[];
+  /** How often this kind of claim turns up, relative to the others. */
+  weight: number;
+}
+
+/** `{place}` and `{year}` are filled in per claim. */
+export const claimPatterns: readonly ClaimPattern[] = [
+  {
+    summary: 'Heat from the Earth’s core is what warms {place}',
+    text: 'The ground under {place} is warming us from below; the core is getting hotter.',
+    topics: ['geothermal', 'energy-budget'],
+    weight: 6,
+  },
+  {
+    summary: 'The sun has been getting brighter since {year}',
+    text: 'Since {year} the sun has simply been putting out more heat, and that is all warming is.',
+    topics: ['solar', 'attribution'],
+    weight: 8,
+  },
+  {
+    summary: 'Global warming stopped in {year}',
+    text: 'There has been no warming since {year}; the record has been flat ever since.',
+    topics: ['temperature-record', 'trends'],
+    weight: 10,
+  },
+  {
+    summary: 'CO2 is too small a share of the air to matter',
+    text: 'Carbon dioxide is only 0.04 per cent of the atmosphere, far too little to change anything.',
+    topics: ['carbon-dioxide', 'greenhouse-effect'],
+    weight: 9,
+  },
+  {
+    summary: 'Water vapour, not CO2, does all the greenhouse warming',
+    text: 'Water vapour is the real greenhouse gas; carbon dioxide is a rounding error.',
+    topics: ['water-vapour', 'greenhouse-effect'],
+    weight: 5,
+  },
+  {
+    summary: 'Volcanoes put out more CO2 than people do',
+    text: 'One eruption near {place} released more carbon dioxide than all our cars in a year.',
+    topics: ['volcanoes', 'carbon-dioxide'],
+    weight: 5,
+  },
+  {
+    summary: 'Cosmic rays set the climate through the clouds',
+    text: 'Cosmic rays seed the clouds, and the clouds decide the temperature, not us.',
+    topics: ['cosmic-rays', 'clouds'],
+    weight: 3,
+  },
+  {
+    summary: 'The oceans are heated by undersea volcanoes',
+    text: 'The sea off {place} is warming because of volcanoes on the seabed.',
+    topics: ['ocean-heat', 'volcanoes'],
+    weight: 3,
+  },
+  {
+    summary: 'The {year} cold snap in {place} disproves global warming',
+    text: 'We had snow in {place} in {year}. So much for global warming.',
+    topics: ['temperature-record', 'weather-vs-climate'],
+    weight: 7,
+  },
+  {
+    summary: 'The {place} weather station was moved to make it warmer',
+    text: 'They moved the {place} station next to a car park in {year} and called it warming.',
+    topics: ['station-data', 'urban-heat'],
+    weight: 4,
+  },
+  {
+    summary: 'Sea level at {place} has not risen since {year}',
+    text: 'The harbour wall at {place} has the same high-water mark as in {year}.',
+    topics: ['sea-level'],
+    weight: 5,
+  },
+  {
+    summary: 'Arctic sea ice has recovered to its {year} extent',
+    text: 'The Arctic ice is back where it was in {year}; the melt has reversed.',
+    topics: ['sea-ice', 'trends'],
+    weight: 4,
+  },
+  {
+    summary: 'Climate has always changed, so today’s change is natural',
+    text: 'The climate changed long before factories, so this is just another natural cycle.',
+    topics: ['attribution', 'paleoclimate'],
+    weight: 7,
+  },
+  {
+    summary: 'The 1930s were hotter than today',
+    text: 'The 1930s were the hottest decade on record, hotter than anything since.',
+    topics: ['temperature-record'],
+    weight: 4,
+  },
+  {
+    summary: 'More CO2 only greens the planet, it cannot warm it',
+    text: 'Carbon dioxide is plant food; more of it makes {place} greener, not warmer.',
+    topics: ['carbon-dioxide', 'ecosystems'],
+    weight: 3,
+  },
+  {
+    summary: 'Heat pumps in {place} raise emissions',
+    text: 'Every heat pump fitted in {place} since {year} has raised emissions, not cut them.',
+    topics: ['energy', 'emissions'],
+    weight: 3,
+  },
+  {
+    summary: 'Warming since {year} is all from urban heat islands',
+    text: 'Towns like {place} grew around the thermometers; that is the whole of the warming.',
+    topics: ['urban-heat', 'station-data'],
+    weight: 4,
+  },
+  {
+    summary: 'Climate sensitivity is too low for CO2 to matter',
+    text: 'Doubling carbon dioxide would warm us by a fraction of a degree at most.',
+    topics: ['climate-sensitivity', 'carbon-dioxide'],
+    weight: 3,
+  },
+];
+
+/** Extra tags a claim may carry besides its pattern's. */
+export const extraTopics: readonly string[] = [
+  'local',
+  'politics',
+  'health',
+  'farming',
+  'flooding',
+  'energy-bills',
+  'transport',
+];
+
+export const places: readonly string[] = [
+  'Marrowby',
+  'Wenlow',
+  'Eastgate',
+  'Fallowmere',
+  'Brackenholt',
+  'Saltry Cove',
+  'Upper Wenlow',
+  'Hollinsby',
+  'Copperwick',
+  'Dunstable Fen',
+  'Greywater',
+  'Ashcombe Vale',
+];
+
+export const givenNames: readonly string[] = [
+  'Aldous',
+  'Bryony',
+  'Cedric',
+  'Delphine',
+  'Ewan',
+  'Fenella',
+  'Gideon',
+  'Hester',
+  'Ivo',
+  'Juniper',
+  'Kit',
+  'Lavinia',
+  'Magnus',
+  'Nerys',
+  'Oswin',
+  'Perpetua',
+  'Quentin',
+  'Rosalind',
+  'Silas',
+  'Tabitha',
+  'Ulric',
+  'Verity',
+  'Wystan',
+  'Yolanda',
+];
+
+export const familyNames: readonly string[] = [
+  'Ashdown',
+  'Blackthorne',
+  'Corrigan',
+  'Dunmore',
+  'Etherington',
+  'Fairweather',
+  'Gallimore',
+  'Holloway',
+  'Illingworth',
+  'Jessop',
+  'Kettlewell',
+  'Larkspur',
+  'Merriman',
+  'Nettleford',
+  'Ormerod',
+  'Pendlebury',
+  'Quarrington',
+  'Rowntree',
+  'Stainthorpe',
+  'Thistlewood',
+  'Underhill',
+  'Varley',
+  'Whitlock',
+  'Yarrow',
+];
+
+export const organisationForms: readonly string[] = [
+  '{place} Energy Forum',
+  '{place} Motorists’ League',
+  '{place} Heating Suppliers Association',
+  'Friends of {place} Moor',
+  '{place} Ratepayers’ Alliance',
+  '{place} Farmers’ Union',
+  '{place} Weather Society',
+  '{place} Chamber of Commerce',
+];
+
+export const publicTitles: readonly string[] = [
+  'Councillor',
+  'Cllr',
+  'Alderman',
+  'Mayor',
+  'Candidate',
+  '',
+];
