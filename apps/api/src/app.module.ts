@@ -6,6 +6,7 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { LoggerModule } from 'nestjs-pino';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
+import { AttachmentsModule } from './attachments/attachments.module';
 import { AuditModule } from './audit/audit.module';
 import { AppearancesModule } from './appearances/appearances.module';
 import { AuthModule } from './auth/auth.module';
@@ -25,6 +26,7 @@ import {
   databaseConfig,
   mailConfig,
   searchConfig,
+  storageConfig,
   type DatabaseConfig,
 } from './config/configuration';
 import { validateEnv } from './config/env.schema';
@@ -54,7 +56,7 @@ export function coreImports(): Array<DynamicModule | Promise<DynamicModule>> {
       // main.ts and the command-line tools load apps/api/.env themselves, before this runs.
       ignoreEnvFile: true,
       validate: validateEnv,
-      load: [appConfig, databaseConfig, authConfig, mailConfig, searchConfig],
+      load: [appConfig, databaseConfig, authConfig, mailConfig, searchConfig, storageConfig],
     }),
     LoggerModule.forRoot({
       pinoHttp: {
@@ -90,6 +92,7 @@ export class AppModule {
         ReplyAttemptsModule,
         ConsultationsModule,
         CommentsModule,
+        AttachmentsModule,
         SearchModule,
       ],
       providers: [

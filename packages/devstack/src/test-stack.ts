@@ -1,4 +1,5 @@
 import { spawnSync } from 'node:child_process';
+import { rm } from 'node:fs/promises';
 import { join } from 'node:path';
 import { apiDir, migrationArgs, startApi } from './api-server.js';
 import { appEnv } from './app-env.js';
@@ -41,6 +42,7 @@ export async function startTestStack(name: string): Promise<TestStack> {
   const database = new TestDatabase(name);
   await database.create();
   const [port, smtpPort, webPort] = [await freePort(), await freePort(), await freePort()];
+  const filesDir = join(tmpDir, `files-${database.name}`);
   const env = {
     ...appEnv({ port, smtpPort, databaseName: database.name }),
     ...database.access,
@@ -48,8 +50,12 @@ export async function startTestStack(name: string): Promise<TestStack> {
     OUTBOX_POLL_MS: '200',
     // Every test signs in from 127.0.0.1; the per-address limit has its own API test.
     AUTH_RATE_LIMIT_PER_MINUTE: '1000',
+    FILES_DIR: filesDir,
   };
-  const stops: Array<() => Promise<unknown>> = [() => database.drop()];
+  const stops: Array<() => Promise<unknown>> = [
+    () => database.drop(),
+    () => rm(filesDir, { recursive: true, force: true }),
+  ];
   try {
     run('migrations', process.execPath, migrationArgs(), env, apiDir);
     run(

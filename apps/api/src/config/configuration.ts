@@ -1,4 +1,5 @@
 import { registerAs, type ConfigType } from '@nestjs/config';
+import { join, resolve } from 'node:path';
 import { validateEnv } from './env.schema';
 
 /**
@@ -69,8 +70,31 @@ export const searchConfig = registerAs('search', () => {
   };
 });
 
+export const storageConfig = registerAs('storage', () => {
+  const env = validateEnv(process.env);
+  const credentials =
+    env.S3_ACCESS_KEY_ID && env.S3_SECRET_ACCESS_KEY
+      ? { accessKeyId: env.S3_ACCESS_KEY_ID, secretAccessKey: env.S3_SECRET_ACCESS_KEY }
+      : undefined;
+  return {
+    driver: env.FILES_STORAGE,
+    /** The local store, and where uploads are staged before they are stored (S3 too). */
+    directory: resolve(env.FILES_DIR ?? join(__dirname, '../../../.data/files')),
+    maxUploadBytes: env.UPLOAD_MAX_BYTES,
+    s3: {
+      bucket: env.S3_BUCKET ?? '',
+      region: env.S3_REGION,
+      endpoint: env.S3_ENDPOINT,
+      forcePathStyle: env.S3_FORCE_PATH_STYLE,
+      credentials,
+      prefix: env.S3_PREFIX,
+    },
+  };
+});
+
 export type AppConfig = ConfigType<typeof appConfig>;
 export type DatabaseConfig = ConfigType<typeof databaseConfig>;
 export type AuthConfig = ConfigType<typeof authConfig>;
 export type MailConfig = ConfigType<typeof mailConfig>;
 export type SearchConfig = ConfigType<typeof searchConfig>;
+export type StorageConfig = ConfigType<typeof storageConfig>;

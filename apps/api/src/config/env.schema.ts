@@ -57,10 +57,32 @@ export const envSchema = databaseEnvSchema
       .string()
       .regex(/^[A-Za-z0-9_-]+$/, { error: 'letters, digits, - and _ only' })
       .default('skyledger'),
+
+    FILES_STORAGE: z.enum(['local', 's3']).default('local'),
+    FILES_DIR: z.string().min(1).optional(),
+    UPLOAD_MAX_BYTES: int(1, 1024 ** 3).default(20 * 1024 ** 2),
+    S3_BUCKET: z.string().min(3).optional(),
+    S3_REGION: z.string().min(1).default('us-east-1'),
+    S3_ENDPOINT: z.url().optional(),
+    S3_FORCE_PATH_STYLE: bool.default(false),
+    S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+    S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+    S3_PREFIX: z
+      .string()
+      .regex(/^[A-Za-z0-9_./-]*$/, { error: 'letters, digits, ., /, - and _ only' })
+      .default(''),
   })
   .refine((env) => env.SEARCH_ENGINE !== 'meilisearch' || env.MEILI_HOST, {
     error: 'is required when SEARCH_ENGINE is meilisearch',
     path: ['MEILI_HOST'],
+  })
+  .refine((env) => env.FILES_STORAGE !== 's3' || env.S3_BUCKET, {
+    error: 'is required when FILES_STORAGE is s3',
+    path: ['S3_BUCKET'],
+  })
+  .refine((env) => Boolean(env.S3_ACCESS_KEY_ID) === Boolean(env.S3_SECRET_ACCESS_KEY), {
+    error: 'set both S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY, or neither',
+    path: ['S3_SECRET_ACCESS_KEY'],
   });
 
 export type Env = z.infer<typeof envSchema>;

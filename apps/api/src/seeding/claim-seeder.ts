@@ -13,8 +13,11 @@ import {
   type CreateSourceRequest,
   type SetAsideReason,
 } from '@skyledger/contracts';
+import { Readable } from 'node:stream';
 import { DataSource } from 'typeorm';
 import { appearanceKind } from '../appearances/appearance-kind';
+import { AttachmentsService } from '../attachments/attachments.service';
+import { stageStream, stagingDirectory } from '../attachments/staged-upload';
 import { type AuthenticatedUser } from '../auth/authenticated-user';
 import { Claimant } from '../claimants/entities/claimant.entity';
 import { ClaimAssignmentService } from '../claims/claim-assignment.service';
@@ -23,6 +26,7 @@ import { ClaimPartsService } from '../claims/claim-parts.service';
 import { ClaimsService } from '../claims/claims.service';
 import { Claim } from '../claims/entities/claim.entity';
 import { commentKind } from '../comments/comment-kind';
+import { storageConfig, type StorageConfig } from '../config/configuration';
 import { consultationKind } from '../consultations/consultation-kind';
 import { replyAttemptKind } from '../reply-attempts/reply-attempt-kind';
 import { Source } from '../sources/entities/source.entity';
@@ -183,11 +187,17 @@ export class ClaimSeeder {
     );
   }
 
-  private upload(actor: AuthenticatedUser, claimId: string, file: SeedFile): Promise<string> {
-    void actor;
-    void claimId;
-    void file;
-    throw new Error('uploads are not wired yet');
+  /** Uploads the bytes the way the desk does: staged, typed from the bytes, stored once. */
+  private async upload(actor: AuthenticatedUser, claimId: string, file: SeedFile): Promise<string> {
+    const staged = await stageStream(Readable.from([file.bytes]), {
+      directory: stagingDirectory(this.context.get<StorageConfig>(storageConfig.KEY)),
+      maxBytes: Number.MAX_SAFE_INTEGER,
+      originalName: file.name,
+    });
+    const attachment = await this.context
+      .get(AttachmentsService, { strict: false })
+      .add(actor, claimId, staged);
+    return attachment.id;
   }
 
   private async actor(email: string): Promise<AuthenticatedUser> {

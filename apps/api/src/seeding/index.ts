@@ -2,12 +2,24 @@ import 'reflect-metadata';
 import { type INestApplicationContext } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import { type Role } from '@skyledger/contracts';
+import { type DataSource } from 'typeorm';
 import { loadEnvFile } from '../config/load-env-file';
+import { dataSourceFromEnv } from '../database/data-source-from-env';
 import { UsersService } from '../users/users.service';
 import { ClaimSeeder, type SeedClaim } from './claim-seeder';
 import { SeedingModule } from './seeding.module';
 
 export type { SeedClaim, SeedFile } from './claim-seeder';
+
+/**
+ * A bare connection to the API's database (the DB_* variables, or apps/api/.env), no
+ * services: for writers that bypass the API's rules on purpose, such as seeds-demo's
+ * generator of invented scale-test rows.
+ */
+export function openDatabase(): Promise<DataSource> {
+  loadEnvFile();
+  return dataSourceFromEnv().initialize();
+}
 
 export interface SeedPerson {
   email: string;

@@ -1,5 +1,6 @@
 import { Module, type DynamicModule } from '@nestjs/common';
 import { coreImports } from '../app.module';
+import { AttachmentsModule } from '../attachments/attachments.module';
 import { ClaimantsModule } from '../claimants/claimants.module';
 import { ClaimsModule } from '../claims/claims.module';
 import { SourcesModule } from '../sources/sources.module';
@@ -11,7 +12,14 @@ export class SeedingModule {
   static forRoot(): DynamicModule {
     return {
       module: SeedingModule,
-      imports: [...coreImports(), UsersModule, ClaimantsModule, ClaimsModule, SourcesModule],
+      imports: [
+        ...coreImports(),
+        UsersModule,
+        ClaimantsModule,
+        ClaimsModule,
+        SourcesModule,
+        AttachmentsModule,
+      ],
     };
   }
 }

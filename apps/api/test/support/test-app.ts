@@ -1,6 +1,8 @@
 import { type INestApplication } from '@nestjs/common';
 import { Test } from '@nestjs/testing';
 import { randomBytes } from 'node:crypto';
+import { rm } from 'node:fs/promises';
+import { join } from 'node:path';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { AppModule } from '../../src/app.module';
@@ -24,6 +26,8 @@ export interface TestApp {
   mail: MailCatcher;
   dataSource: DataSource;
   users: UsersService;
+  /** Where this suite's local file store lives (FILES_DIR). */
+  filesDir: string;
   /** Creates an active person with this role and password. */
   addUser(
     role: Role,
@@ -46,6 +50,8 @@ export async function createTestApp(
 ): Promise<TestApp> {
   const database = new TestDatabase(suite);
   await database.create();
+  // Each suite stores its files apart, under the repository's ignored tmp folder.
+  const filesDir = join(__dirname, '../../../../tmp', `files-${database.name}`);
   const mail = await new MailCatcher().start();
   Object.assign(process.env, {
     NODE_ENV: 'test',
@@ -59,6 +65,7 @@ export async function createTestApp(
     OUTBOX_POLL_MS: '100',
     AUTH_RATE_LIMIT_PER_MINUTE: '1000',
     WEB_DIST_DIR: '/nonexistent',
+    FILES_DIR: filesDir,
     ...env,
   });
 
@@ -87,6 +94,7 @@ export async function createTestApp(
     mail,
     dataSource: app.get(DataSource),
     users,
+    filesDir: process.env.FILES_DIR!,
     async addUser(role, email, password = testPassword) {
       const user = await users.upsertActiveUser({
         email,
@@ -108,6 +116,7 @@ export async function createTestApp(
       await app.close();
       await mail.stop();
       await database.drop();
+      await rm(filesDir, { recursive: true, force: true });
     },
   };
   return testApp;
