@@ -78,3 +78,9 @@ export interface SimilarClaim {
   explainerUrl: string | null;
   score: number;
 }
+
+/** What a rebuild of the search index did. */
+export interface SearchReindexResponse {
+  documents: number;
+  milliseconds: number;
+}

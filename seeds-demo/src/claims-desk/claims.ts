@@ -350,7 +350,7 @@ export const demoClaims: SeedClaim[] = [
   },
   {
     summary: 'Warming has paused since 2016, says a reshared podcast clip',
-    text: 'Warming stopped in 2016. Nine years, no new record worth the name.',
+    text: 'The planet has not warmed since 2016 — the pause is back, and nobody will say so.',
     topics: ['temperature-record', 'trends'],
     claimant: claimants.podcaster,
     filedBy: desk.reporter,

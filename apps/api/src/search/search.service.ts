@@ -54,7 +54,10 @@ export class SearchService {
     return this.run({ ...query, type: 'explainer' }, { audience: 'public' });
   }
 
-  /** The closest earlier claims to a text being typed; set-aside claims are left out. */
+  /**
+   * The closest earlier claims to a text being typed, set-aside ones included: a claim
+   * set aside as a duplicate still tells the reporter the desk has seen it.
+   */
   async similarClaims(text: string): Promise<SimilarClaim[]> {
     const result = await this.engine.search({
       q: text,
@@ -65,7 +68,6 @@ export class SearchService {
     });
     const best = result.hits[0]?.score ?? 0;
     return result.hits
-      .filter((hit) => hit.document.status !== 'set_aside')
       .filter((hit) => hit.score >= best * SIMILAR_RELATIVE_FLOOR)
       .slice(0, SIMILAR_LIMIT)
       .map(({ document, score }) => ({

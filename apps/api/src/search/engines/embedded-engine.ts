@@ -15,8 +15,11 @@ import {
 } from '../search-engine';
 import { normaliseTerm, wordsOf } from '../normalise-term';
 
-/** Typos forgiven per word: none for short words, where a typo is another word. */
-export const typoAllowance = (term: string) => (term.length >= 9 ? 2 : term.length >= 4 ? 1 : 0);
+/**
+ * Typos forgiven per word: none below five letters, where one typo is often another word
+ * ("core" and "more"); the same thresholds as Meilisearch's defaults.
+ */
+export const typoAllowance = (term: string) => (term.length >= 9 ? 2 : term.length >= 5 ? 1 : 0);
 
 /** Prefix matching from three letters on, for type-ahead. */
 export const prefixAllowed = (term: string) => term.length >= 3;
@@ -39,7 +42,15 @@ function queryOf(q: string, match: EngineQuery['match']): Query {
     combineWith: match === 'all' ? 'AND' : 'OR',
     queries: terms.map((term) => ({
       combineWith: 'OR',
-      queries: [term, ...(searchSynonyms[term] ?? [])],
+      queries: [
+        term,
+        // A synonym is a word the desk chose: it matches as written, not with typos.
+        ...(searchSynonyms[term] ?? []).map((synonym) => ({
+          queries: [synonym],
+          fuzzy: false,
+          prefix: false,
+        })),
+      ],
     })),
   };
 }

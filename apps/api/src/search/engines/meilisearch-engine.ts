@@ -27,7 +27,7 @@ export const meilisearchSettings = {
   filterableAttributes: ['type', 'status', 'topicList', 'rating', 'date', 'audience'],
   sortableAttributes: ['date'],
   synonyms: searchSynonyms,
-  typoTolerance: { enabled: true, minWordSizeForTypos: { oneTypo: 4, twoTypos: 9 } },
+  typoTolerance: { enabled: true, minWordSizeForTypos: { oneTypo: 5, twoTypos: 9 } },
 };
 
 const quoted = (value: string) => JSON.stringify(value);
