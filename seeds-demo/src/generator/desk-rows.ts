@@ -4,7 +4,8 @@ import {
   type Role,
   type SetAsideReason,
 } from '@skyledger/contracts';
-import { SeededRandom } from './random';
+import { type SeededRandom } from './random';
+import { type SourceRow } from './source-rows';
 import {
   claimPatterns,
   extraTopics,
@@ -15,11 +16,22 @@ import {
   publicTitles,
 } from './vocabulary';
 
+/*
+ * Rows as the generator writes them, keyed by the API entities' property names (the
+ * writer maps them to columns through TypeORM's metadata, so a renamed column fails loudly).
+ */
+
 export interface PersonRow {
   id: string;
   email: string;
   displayName: string;
   role: Role;
+  status: 'active';
+  /** No password: a generated person cannot sign in. */
+  passwordHash: null;
+  createdAt: Date;
+  updatedAt: Date;
+  version: number;
 }
 
 export interface ClaimantRow {
@@ -28,6 +40,10 @@ export interface ClaimantRow {
   kind: ClaimantKind;
   affiliation: string | null;
   notes: string;
+  nameShownPublicly: boolean;
+  createdAt: Date;
+  updatedAt: Date;
+  version: number;
 }
 
 export interface ClaimRow {
@@ -50,7 +66,36 @@ export interface TopicRow {
   topic: string;
 }
 
+export interface ClaimSourceRow {
+  claimId: string;
+  sourceId: string;
+  linkedById: string;
+  linkedAt: Date;
+}
+
+/** One generated claim and the rows that hang off it, in the order they are written. */
+export interface GeneratedClaim {
+  claim: ClaimRow;
+  topics: TopicRow[];
+  sourceLinks: ClaimSourceRow[];
+}
+
+/** The time span generated rows fall in. */
+export interface DeskSpan {
+  /** Filing dates run from `until - years` to `until`, busier towards the end. */
+  until: Date;
+  years: number;
+}
+
+/** Generated people and claimants say so, wherever the desk shows them. */
+export const GENERATED_EMAIL_DOMAIN = 'generated.marrowby-gazette.test';
+export const GENERATED_NOTE = 'Generated for scale tests by the seeds-demo generator; invented.';
+
 const DAY_MS = 86_400_000;
+
+export function spanStart(span: DeskSpan): Date {
+  return new Date(span.until.getTime() - span.years * 365 * DAY_MS);
+}
 
 /** The statuses a claim of this age is likely to have reached: new ones open, old ones done. */
 function statusWeights(ageDays: number): Record<ClaimStatus, number> {
@@ -88,32 +133,35 @@ function statusWeights(ageDays: number): Record<ClaimStatus, number> {
 }
 
 /** The invented desk that files and researches generated claims: fixed e-mails, seeded ids. */
-export function benchPeople(random: SeededRandom): PersonRow[] {
+export function generatedPeople(random: SeededRandom, span: DeskSpan): PersonRow[] {
   const roster: Array<[Role, number]> = [
     ['reporter', 8],
     ['science_editor', 6],
     ['copy_desk', 2],
     ['desk_chief', 2],
   ];
+  const joined = spanStart(span);
   const people: PersonRow[] = [];
   for (const [role, count] of roster) {
     for (let n = 1; n <= count; n += 1) {
       people.push({
         id: random.uuid(),
-        email: `${role.replace('_', '-')}-${String(n).padStart(2, '0')}@bench.marrowby-gazette.test`,
+        email: `${role.replace('_', '-')}-${String(n).padStart(2, '0')}@${GENERATED_EMAIL_DOMAIN}`,
         displayName: `${random.pick(givenNames)} ${random.pick(familyNames)}`,
         role,
+        status: 'active',
+        passwordHash: null,
+        createdAt: joined,
+        updatedAt: joined,
+        version: 1,
       });
     }
   }
   return people;
 }
 
-function fill(template: string, random: SeededRandom, year: number): string {
-  return template.replace('{place}', random.pick(places)).replace('{year}', String(year));
-}
-
-export function claimantRows(random: SeededRandom, count: number): ClaimantRow[] {
+export function claimantRows(random: SeededRandom, count: number, span: DeskSpan): ClaimantRow[] {
+  const known = spanStart(span);
   return Array.from({ length: count }, (_, index) => {
     const kind = random.weighted<ClaimantKind>({
       public_figure: 45,
@@ -123,7 +171,7 @@ export function claimantRows(random: SeededRandom, count: number): ClaimantRow[]
     const person = `${random.pick(givenNames)} ${random.pick(familyNames)}`;
     const name =
       kind === 'organisation'
-        ? fill(random.pick(organisationForms), random, 0)
+        ? random.pick(organisationForms).replace('{place}', random.pick(places))
         : kind === 'public_figure'
           ? `${random.pick(publicTitles)} ${person}`.trim()
           : person;
@@ -133,32 +181,39 @@ export function claimantRows(random: SeededRandom, count: number): ClaimantRow[]
       name: `${name} ${index + 1}`,
       kind,
       affiliation: kind === 'public_figure' ? `${random.pick(places)} Borough Council` : null,
-      notes: 'Generated for scale tests (seeds-demo generate-claims); invented.',
+      notes: GENERATED_NOTE,
+      // As ClaimantsService files them: only a desk chief may show a private name.
+      nameShownPublicly: false,
+      createdAt: known,
+      updatedAt: known,
+      version: 1,
     };
   });
 }
 
 /**
- * The generator's whole output as rows, a pure function of its options: the same seed
- * gives the same rows, so the first rows can be checked without a database.
+ * The claims, one at a time (100 000 need not sit in memory), each following the claim
+ * life: a `filed` claim has nobody on it, every claim past `filed` was researched by a
+ * science editor or desk chief (a set-aside one maybe), a `set_aside` claim has its
+ * reason, and sources are cited only on researched claims, by whoever researched them.
  */
 export function* claimRows(
   random: SeededRandom,
-  options: {
+  options: DeskSpan & {
     count: number;
     claimants: readonly ClaimantRow[];
     people: readonly PersonRow[];
-    /** Filing dates run from `until - years` to `until`, busier towards the end. */
-    until: Date;
-    years: number;
+    /** Sources by topic; a researched claim cites a few on its own topics. */
+    sourcesByTopic: ReadonlyMap<string, readonly SourceRow[]>;
   },
-): Generator<{ claim: ClaimRow; topics: TopicRow[] }> {
+): Generator<GeneratedClaim> {
   const reporters = options.people.filter((person) => person.role === 'reporter');
   const editors = options.people.filter((person) => person.role === 'science_editor');
   const chiefs = options.people.filter((person) => person.role === 'desk_chief');
   if (reporters.length === 0 || editors.length === 0 || chiefs.length === 0) {
-    throw new Error('generateClaims needs at least one reporter, science editor and desk chief');
+    throw new Error('claimRows needs at least one reporter, science editor and desk chief');
   }
+  if (options.claimants.length === 0) throw new Error('claimRows needs at least one claimant');
   const patternWeights = Object.fromEntries(
     claimPatterns.map((pattern, index) => [String(index), pattern.weight]),
   );
@@ -185,12 +240,26 @@ export function* claimRows(
     const filedBy = random.chance(0.8) ? random.pick(reporters) : random.pick(editors);
     const legalReview = random.chance(claimant.kind === 'private_individual' ? 0.25 : 0.02);
     const busyDays = status === 'filed' ? 2 : 60;
-    const updatedAt = new Date(
-      createdAt.getTime() + Math.floor(random.next() * Math.min(ageDays, busyDays) * DAY_MS),
-    );
+    const busyMs = Math.floor(random.next() * Math.min(ageDays, busyDays) * DAY_MS);
+    const updatedAt = new Date(createdAt.getTime() + busyMs);
     const topics = new Set(pattern.topics);
     if (random.chance(0.3)) topics.add(random.pick(extraTopics));
     const id = random.uuid();
+
+    const sourceLinks = assignee
+      ? random
+          .pickDistinct(
+            options.sourcesByTopic.get(random.pick(pattern.topics)) ?? [],
+            1 + random.below(4),
+            2,
+          )
+          .map((source) => ({
+            claimId: id,
+            sourceId: source.id,
+            linkedById: assignee.id,
+            linkedAt: new Date(createdAt.getTime() + Math.floor(random.next() * busyMs)),
+          }))
+      : [];
     yield {
       claim: {
         id,
@@ -214,6 +283,7 @@ export function* claimRows(
         version: 1 + random.below(status === 'filed' ? 2 : 8),
       },
       topics: [...topics].map((topic) => ({ claimId: id, topic })),
+      sourceLinks,
     };
   }
 }

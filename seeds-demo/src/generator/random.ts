@@ -1,50 +1,38 @@
+import { uniformFloat64 } from 'pure-rand/distribution/uniformFloat64';
+import { uniformInt } from 'pure-rand/distribution/uniformInt';
+import { xoroshiro128plus } from 'pure-rand/generator/xoroshiro128plus';
+import { type JumpableRandomGenerator } from 'pure-rand/types/JumpableRandomGenerator';
+
 /**
- * A small seeded pseudo-random generator, so a generated desk is the same on every run
- * with the same seed. sfc32 (Chris Doty-Humphrey's Small Fast Counting generator, from
- * PractRand), its state filled from the seed by a splitmix-style counter hashed with
- * MurmurHash3's 32-bit finaliser.
+ * The kinds of rows the generator makes, each drawn from a random stream of its own, so
+ * adding a kind (or changing how one kind is drawn) leaves the others' rows as they were
+ * for the same seed. Append new kinds at the end: a stream's position is its identity.
+ */
+export const randomStreams = ['people', 'claimants', 'sources', 'claims'] as const;
+export type RandomStream = (typeof randomStreams)[number];
+
+/**
+ * A seeded random source for generated rows, so a generated desk is the same on every
+ * run with the same seed. xoroshiro128+ from pure-rand; the streams are its jumps
+ * (2^64 draws apart), so they never overlap.
  */
 export class SeededRandom {
-  private a: number;
-  private b: number;
-  private c: number;
-  private d: number;
+  private constructor(private readonly generator: JumpableRandomGenerator) {}
 
-  constructor(seed: number) {
-    let state = seed >>> 0;
-    const splitmix = () => {
-      state = (state + 0x9e3779b9) >>> 0;
-      let z = state;
-      z = Math.imul(z ^ (z >>> 16), 0x85ebca6b) >>> 0;
-      z = Math.imul(z ^ (z >>> 13), 0xc2b2ae35) >>> 0;
-      return (z ^ (z >>> 16)) >>> 0;
-    };
-    this.a = splitmix();
-    this.b = splitmix();
-    this.c = splitmix();
-    this.d = splitmix();
-    for (let i = 0; i < 12; i += 1) this.uint32();
-  }
-
-  /** The next 32-bit unsigned integer. */
-  uint32(): number {
-    const t = (((this.a + this.b) >>> 0) + this.d) >>> 0;
-    this.d = (this.d + 1) >>> 0;
-    this.a = this.b ^ (this.b >>> 9);
-    this.b = (this.c + (this.c << 3)) >>> 0;
-    this.c = ((this.c << 21) | (this.c >>> 11)) >>> 0;
-    this.c = (this.c + t) >>> 0;
-    return t;
+  static stream(seed: number, stream: RandomStream): SeededRandom {
+    const generator = xoroshiro128plus(seed);
+    for (let jumps = 0; jumps <= randomStreams.indexOf(stream); jumps += 1) generator.jump();
+    return new SeededRandom(generator);
   }
 
   /** A number in [0, 1). */
   next(): number {
-    return this.uint32() / 0x1_0000_0000;
+    return uniformFloat64(this.generator);
   }
 
   /** An integer in [0, n). */
   below(n: number): number {
-    return Math.floor(this.next() * n);
+    return uniformInt(this.generator, 0, n - 1);
   }
 
   chance(probability: number): boolean {
@@ -54,6 +42,15 @@ export class SeededRandom {
   pick<T>(items: readonly T[]): T {
     if (items.length === 0) throw new Error('pick() needs at least one item');
     return items[this.below(items.length)]!;
+  }
+
+  /** Up to `count` different items, in the order drawn. */
+  pickDistinct<T>(items: readonly T[], count: number, skew = 1): T[] {
+    const picked = new Set<T>();
+    for (let tries = 0; picked.size < Math.min(count, items.length) && tries < count * 4; tries++) {
+      picked.add(items[this.skewedIndex(items.length, skew)]!);
+    }
+    return [...picked];
   }
 
   /** One of the keys, with probability proportional to its weight. */
@@ -76,11 +73,11 @@ export class SeededRandom {
     return Math.min(n - 1, Math.floor(n * this.next() ** skew));
   }
 
-  /** A version-4 UUID made from this generator, so ids repeat with the seed. */
+  /** A version-4 UUID (RFC 9562 §5.4) made from this stream, so ids repeat with the seed. */
   uuid(): string {
-    const hex = Array.from({ length: 4 }, () => this.uint32().toString(16).padStart(8, '0')).join(
-      '',
-    );
+    const hex = Array.from({ length: 4 }, () =>
+      (this.generator.next() >>> 0).toString(16).padStart(8, '0'),
+    ).join('');
     const variant = ((parseInt(hex[16]!, 16) & 0x3) | 0x8).toString(16);
     return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-4${hex.slice(13, 16)}-${variant}${hex.slice(17, 20)}-${hex.slice(20, 32)}`;
   }

@@ -1,6 +1,9 @@
+import { type ReliabilityGrade, type SourceKind } from '@skyledger/contracts';
+
 /**
  * What generated claims are made of: claim patterns on the PRODUCT.md topics, invented
- * names and places. Generated rows are for scale tests and the benchmark, never the demo.
+ * names, places, publishers and sources. Generated rows are for scale tests and the
+ * benchmark, never the demo.
  */
 export interface ClaimPattern {
   summary: string;
@@ -221,3 +224,103 @@ export const publicTitles: readonly string[] = [
   'Candidate',
   '',
 ];
+
+/**
+ * Kinds of generated sources: a title pattern on a topic (`{topic}`, `{place}`, `{year}`
+ * filled in), who publishes that kind, and how the desk tends to grade it.
+ */
+export interface SourcePattern {
+  kind: SourceKind;
+  title: string;
+  publishers: readonly string[];
+  grades: Readonly<Partial<Record<ReliabilityGrade, number>>>;
+  /** Whether it has a DOI (else a web address); expert interviews have neither. */
+  cited: 'doi' | 'url' | 'none';
+  weight: number;
+}
+
+export const sourcePatterns: readonly SourcePattern[] = [
+  {
+    kind: 'peer_reviewed_paper',
+    title: 'A regional reassessment of {topic} around {place}, {year}',
+    publishers: [
+      'Fallowmere Journal of Atmospheric Physics',
+      'Annals of the Wenlow Geophysical Society',
+    ],
+    grades: { strong: 6, adequate: 3, weak: 1 },
+    cited: 'doi',
+    weight: 8,
+  },
+  {
+    kind: 'preprint',
+    title: 'Revisiting {topic}: a preliminary analysis of the {place} record',
+    publishers: ['Copperwick Open Preprints'],
+    grades: { adequate: 3, weak: 4 },
+    cited: 'doi',
+    weight: 3,
+  },
+  {
+    kind: 'assessment_report',
+    title: 'The {year} assessment of {topic} for the northern counties',
+    publishers: ['Northern Counties Climate Panel'],
+    grades: { strong: 9, adequate: 1 },
+    cited: 'doi',
+    weight: 3,
+  },
+  {
+    kind: 'agency_dataset',
+    title: '{topic} observations, {place} station network, to {year}',
+    publishers: ['Greywater Environment Agency', 'Eastgate Meteorological Service'],
+    grades: { strong: 7, adequate: 3 },
+    cited: 'url',
+    weight: 6,
+  },
+  {
+    kind: 'agency_statement',
+    title: 'Statement on {topic} in {place} ({year})',
+    publishers: ['Greywater Environment Agency', 'Eastgate Meteorological Service'],
+    grades: { strong: 3, adequate: 6 },
+    cited: 'url',
+    weight: 4,
+  },
+  {
+    kind: 'press_release',
+    title: '{place} group says new figures on {topic} change the picture',
+    publishers: ['Hollinsby Energy Forum', 'Saltry Cove Ratepayers’ Alliance'],
+    grades: { weak: 6, unreliable: 4 },
+    cited: 'url',
+    weight: 3,
+  },
+  {
+    kind: 'news_report',
+    title: 'What the {year} figures on {topic} mean for {place}',
+    publishers: ['Brackenholt Evening Courier', 'Ashcombe Vale Herald'],
+    grades: { adequate: 5, weak: 5 },
+    cited: 'url',
+    weight: 4,
+  },
+  {
+    kind: 'blog_or_social_post',
+    title: 'Why I stopped believing the {topic} story ({place}, {year})',
+    publishers: ['Upper Wenlow Notes (blog)'],
+    grades: { weak: 3, unreliable: 7 },
+    cited: 'url',
+    weight: 2,
+  },
+  {
+    kind: 'expert_interview',
+    title: 'Interview on {topic} with a researcher at the University of Marrowby',
+    publishers: ['Marrowby Gazette science desk'],
+    grades: { strong: 2, adequate: 7, weak: 1 },
+    cited: 'none',
+    weight: 2,
+  },
+];
+
+/** Why a generated source got its grade, per grade. */
+export const gradeReasons: Readonly<Record<ReliabilityGrade, string>> = {
+  strong: 'Primary, reviewed evidence that bears directly on the claim.',
+  adequate: 'Credible and relevant, with limits the explainer should mention.',
+  weak: 'Indirect or unreviewed; used only beside stronger sources.',
+  unreliable: 'No traceable evidence behind it; cited only to show where the claim came from.',
+};

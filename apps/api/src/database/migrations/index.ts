@@ -1,5 +1,10 @@
 import { Initial1796165154418 } from './1796165154418-Initial';
 import { ClaimsDesk1796174782267 } from './1796174782267-ClaimsDesk';
+import { QueueSortIndexes1796219054468 } from './1796219054468-QueueSortIndexes';
 
 /** Every migration in order, listed by class so the same list works from dist/ and under Jest. */
-export const migrations = [Initial1796165154418, ClaimsDesk1796174782267];
+export const migrations = [
+  Initial1796165154418,
+  ClaimsDesk1796174782267,
+  QueueSortIndexes1796219054468,
+];

@@ -1,0 +1,10 @@
+export {
+  deskDefaults,
+  generateDesk,
+  generatedDesk,
+  GeneratorRefusal,
+  type DeskOptions,
+  type GenerateResult,
+  type GeneratedDesk,
+} from './generate-desk';
+export { GENERATED_EMAIL_DOMAIN, type ClaimRow, type GeneratedClaim } from './desk-rows';
