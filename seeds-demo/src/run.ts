@@ -6,9 +6,10 @@ import { seedDemo } from './seed-demo';
 async function main(): Promise<void> {
   const seeding = await SeedingContext.open();
   try {
-    const { people, claims } = await seedDemo(seeding);
+    const { people, datasets, claims } = await seedDemo(seeding);
     console.info(
-      `Demo newsroom (${newsroom.outlet}): ${people.created} of ${people.total} people and ` +
+      `Demo newsroom (${newsroom.outlet}): ${people.created} of ${people.total} people, ` +
+        `${datasets.created} of ${datasets.total} datasets and ` +
         `${claims.created} of ${claims.total} claims created, the rest already there.`,
     );
   } finally {

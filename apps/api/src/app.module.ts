@@ -7,6 +7,8 @@ import { LoggerModule } from 'nestjs-pino';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { AttachmentsModule } from './attachments/attachments.module';
+import { CalculatorsModule } from './calculators/calculators.module';
+import { DatasetsModule } from './datasets/datasets.module';
 import { AuditModule } from './audit/audit.module';
 import { AppearancesModule } from './appearances/appearances.module';
 import { AuthModule } from './auth/auth.module';
@@ -15,6 +17,7 @@ import { ClaimsModule } from './claims/claims.module';
 import { CommentsModule } from './comments/comments.module';
 import { ConsultationsModule } from './consultations/consultations.module';
 import { ReplyAttemptsModule } from './reply-attempts/reply-attempts.module';
+import { WorkingsModule } from './workings/workings.module';
 import { SearchModule } from './search/search.module';
 import { SourcesModule } from './sources/sources.module';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
@@ -93,6 +96,9 @@ export class AppModule {
         ConsultationsModule,
         CommentsModule,
         AttachmentsModule,
+        CalculatorsModule,
+        DatasetsModule,
+        WorkingsModule,
         SearchModule,
       ],
       providers: [

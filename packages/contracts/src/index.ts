@@ -14,3 +14,5 @@ export * from './reply-attempts.js';
 export * from './consultations.js';
 export * from './comments.js';
 export * from './search.js';
+export * from './datasets.js';
+export * from './workings.js';

@@ -3,6 +3,7 @@ import { captures } from './captures';
 import { claimants } from './claimants';
 import { desk } from './desk';
 import { sources } from './sources';
+import { demoWorkings } from './workings';
 
 const london = 'Europe/London';
 
@@ -51,6 +52,7 @@ export const demoClaims: SeedClaim[] = [
       },
     ],
     assignee: { email: desk.editor, by: desk.editor },
+    workings: demoWorkings.core,
     sources: [
       { source: sources.heatFlux, by: desk.editor },
       { source: sources.ar6EnergyBudget, by: desk.editor },
@@ -107,6 +109,7 @@ export const demoClaims: SeedClaim[] = [
       },
     ],
     assignee: { email: desk.editor, by: desk.chief },
+    workings: demoWorkings.sun,
     sources: [
       { source: sources.forumRelease, by: desk.reporter },
       { source: sources.solarIrradiance, by: desk.editor },
@@ -146,6 +149,7 @@ export const demoClaims: SeedClaim[] = [
       },
     ],
     assignee: { email: desk.editor, by: desk.editor },
+    workings: demoWorkings.pause,
     sources: [
       { source: sources.newsletterPost, by: desk.reporter },
       { source: sources.stationSeries, by: desk.editor },
@@ -193,6 +197,7 @@ export const demoClaims: SeedClaim[] = [
       },
     ],
     assignee: { email: desk.editor, by: desk.editor },
+    workings: demoWorkings.co2,
     sources: [
       { source: sources.ghgForcing, by: desk.editor },
       { source: sources.ar6EnergyBudget, by: desk.editor },
@@ -292,6 +297,7 @@ export const demoClaims: SeedClaim[] = [
       },
     ],
     assignee: { email: desk.editor, by: desk.editor },
+    workings: demoWorkings.oceans,
     sources: [
       { source: sources.courierReport, by: desk.reporter },
       { source: sources.heatFlowDataSet, by: desk.editor },

@@ -1,14 +1,5 @@
-import {
-  Controller,
-  Get,
-  HttpStatus,
-  Post,
-  StreamableFile,
-  UploadedFile,
-  UseInterceptors,
-} from '@nestjs/common';
-import { FileInterceptor } from '@nestjs/platform-express';
-import { ApiBearerAuth, ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
+import { Controller, Get, Post, StreamableFile, UploadedFile } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import {
   inlineMediaTypes,
   type AttachmentMediaType,
@@ -20,8 +11,8 @@ import { claimRoles } from '../claims/claim-policy';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { UuidParam } from '../common/decorators/uuid-param.decorator';
-import { ApiError } from '../common/errors/api-error';
 import { AttachmentsService } from './attachments.service';
+import { FileUpload, requireFile } from './file-upload.decorator';
 import { type ReceivedFile } from './staging-multer-storage';
 
 @ApiTags('attachments')
@@ -36,26 +27,13 @@ export class AttachmentsController {
    */
   @Post('claims/:id/attachments')
   @Roles(...claimRoles.contribute)
-  @UseInterceptors(FileInterceptor('file'))
-  @ApiConsumes('multipart/form-data')
-  @ApiBody({
-    schema: {
-      type: 'object',
-      required: ['file'],
-      properties: { file: { type: 'string', format: 'binary' } },
-    },
-  })
+  @FileUpload()
   upload(
     @CurrentUser() actor: AuthenticatedUser,
     @UuidParam() claimId: string,
     @UploadedFile() file: ReceivedFile | undefined,
   ): Promise<AttachmentView> {
-    if (!file) {
-      throw new ApiError(HttpStatus.BAD_REQUEST, 'Attach a file in the field "file"', {
-        file: 'required',
-      });
-    }
-    return this.attachments.add(actor, claimId, file);
+    return this.attachments.add(actor, claimId, requireFile(file));
   }
 
   /** The bytes of an evidence file: images and PDFs inline, everything else as a download. */

@@ -29,6 +29,7 @@ import { stagingMulterStorage } from './staging-multer-storage';
   ],
   controllers: [AttachmentsController],
   providers: [AttachmentsService],
-  exports: [AttachmentsService],
+  // MulterModule too: other features take uploads through the same staging engine.
+  exports: [AttachmentsService, MulterModule],
 })
 export class AttachmentsModule {}

@@ -1,6 +1,6 @@
 import { HttpStatus, Inject, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { type AttachmentView } from '@skyledger/contracts';
+import { type AttachmentMediaType, type AttachmentView } from '@skyledger/contracts';
 import { type Readable } from 'node:stream';
 import { DataSource } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
@@ -28,29 +28,47 @@ export class AttachmentsService {
     private readonly audit: AuditService,
   ) {}
 
+  /** Files a staged upload under a claim, as evidence. */
+  add(actor: AuthenticatedUser, claimId: string, upload: StagedUpload): Promise<AttachmentView> {
+    return this.store(actor, upload, { claimId, accept: null });
+  }
+
+  /** Keeps the CSV file behind a dataset: no claim, and only CSV is accepted. */
+  addDatasetFile(actor: AuthenticatedUser, upload: StagedUpload): Promise<AttachmentView> {
+    return this.store(actor, upload, { claimId: null, accept: ['text/csv'] });
+  }
+
   /**
-   * Files a staged upload under a claim. The staged copy is removed whatever happens;
-   * the stored bytes are written once per SHA-256, before the row that points at them.
+   * Types and stores a staged upload. The staged copy is removed whatever happens; the
+   * stored bytes are written once per SHA-256, before the row that points at them.
    */
-  async add(
+  private async store(
     actor: AuthenticatedUser,
-    claimId: string,
     upload: StagedUpload,
+    target: { claimId: string | null; accept: readonly AttachmentMediaType[] | null },
   ): Promise<AttachmentView> {
+    const { claimId, accept } = target;
     try {
-      await this.claims.findOrFail(claimId);
+      if (claimId) await this.claims.findOrFail(claimId);
       const sniffed = await sniffMediaType(upload.path, upload.originalName);
       if (!sniffed.accepted) {
         throw new ApiError(HttpStatus.UNSUPPORTED_MEDIA_TYPE, sniffed.message, {
           file: sniffed.reason,
         });
       }
+      if (accept && !accept.includes(sniffed.mediaType)) {
+        throw new ApiError(
+          HttpStatus.UNSUPPORTED_MEDIA_TYPE,
+          `This needs a CSV file (a header row, then rows of the same width); the file is ${sniffed.mediaType}`,
+          { file: 'unsupportedType' },
+        );
+      }
       const storageKey = contentKey(upload.sha256);
       const alreadyStored = await this.storage.has(storageKey);
       if (!alreadyStored) await this.storage.putFile(storageKey, upload.path, sniffed.mediaType);
 
       const id = await this.dataSource.transaction(async (manager) => {
-        await this.claims.lockForContribution(manager, claimId, actor);
+        if (claimId) await this.claims.lockForContribution(manager, claimId, actor);
         const attachment = await manager.save(
           manager.create(Attachment, {
             claimId,
@@ -82,6 +100,16 @@ export class AttachmentsService {
     } finally {
       await discardStaged(upload);
     }
+  }
+
+  /** The whole stored file, for the server's own reading (a dataset's CSV). */
+  async readAll(id: string): Promise<{ attachment: Attachment; bytes: Buffer }> {
+    const attachment = await this.findOrFail(id);
+    const chunks: Buffer[] = [];
+    for await (const chunk of await this.storage.open(attachment.storageKey)) {
+      chunks.push(chunk as Buffer);
+    }
+    return { attachment, bytes: Buffer.concat(chunks) };
   }
 
   async download(id: string): Promise<AttachmentDownload> {

@@ -9,10 +9,12 @@ import { Comment } from '../comments/entities/comment.entity';
 import { ExpertConsultation } from '../consultations/entities/expert-consultation.entity';
 import { OutboxMessage } from '../mail/entities/outbox-message.entity';
 import { ReplyAttempt } from '../reply-attempts/entities/reply-attempt.entity';
+import { Dataset } from '../datasets/entities/dataset.entity';
 import { ClaimSource } from '../sources/entities/claim-source.entity';
 import { Source } from '../sources/entities/source.entity';
 import { OneTimeToken } from '../users/entities/one-time-token.entity';
 import { User } from '../users/entities/user.entity';
+import { Working } from '../workings/entities/working.entity';
 
 /** Every entity, listed once for the app and the migration CLI. */
 export const entities = [
@@ -31,4 +33,6 @@ export const entities = [
   ReplyAttempt,
   ExpertConsultation,
   Comment,
+  Dataset,
+  Working,
 ];

@@ -31,7 +31,9 @@ import { consultationKind } from '../consultations/consultation-kind';
 import { replyAttemptKind } from '../reply-attempts/reply-attempt-kind';
 import { Source } from '../sources/entities/source.entity';
 import { SourcesService } from '../sources/sources.service';
-import { UsersService } from '../users/users.service';
+import { workingKind } from '../workings/working-kind';
+import { Dataset } from '../datasets/entities/dataset.entity';
+import { seedActor } from './seed-actor';
 
 /** A file the seed uploads as it is: its name and its bytes. */
 export interface SeedFile {
@@ -66,6 +68,11 @@ export interface SeedClaim {
   replyAttempts?: Array<CreateReplyAttemptRequest & By>;
   consultations?: Array<CreateConsultationRequest & By>;
   comments?: Array<{ body: string } & By>;
+  /**
+   * Calculator runs kept on the claim. A series input may name a seeded dataset by its
+   * name, `{ dataset: '<name>', column }`: the seeder puts in its id.
+   */
+  workings?: Array<{ calculatorId: string; inputs: Record<string, unknown>; note?: string } & By>;
   setAside?: { reason: SetAsideReason; note?: string } & By;
 }
 
@@ -151,6 +158,13 @@ export class ClaimSeeder {
       const fields = createConsultationSchema.parse(consultation);
       await this.parts.add(consultationKind, await this.actor(by), id, fields);
     }
+    for (const { by, calculatorId, inputs, note } of spec.workings ?? []) {
+      await this.parts.add(workingKind, await this.actor(by), id, {
+        calculatorId,
+        inputs: await this.withDatasetIds(inputs),
+        note: note ?? null,
+      });
+    }
     for (const { by, ...comment } of spec.comments ?? []) {
       await this.parts.add(
         commentKind,
@@ -171,6 +185,24 @@ export class ClaimSeeder {
         });
     }
     return { id, created: true };
+  }
+
+  /** Replaces dataset names in `{ dataset, column }` series inputs with the datasets' ids. */
+  private async withDatasetIds(inputs: Record<string, unknown>): Promise<Record<string, unknown>> {
+    const manager = this.context.get(DataSource).manager;
+    const resolve = async (value: unknown): Promise<unknown> => {
+      if (Array.isArray(value)) return Promise.all(value.map(resolve));
+      if (typeof value !== 'object' || value === null || !('dataset' in value)) return value;
+      const name = String((value as { dataset: unknown }).dataset);
+      const dataset = await manager.findOne(Dataset, { where: { name } });
+      if (!dataset) throw new Error(`Seed the dataset "${name}" before the workings that read it`);
+      return { ...value, dataset: dataset.id };
+    };
+    return Object.fromEntries(
+      await Promise.all(
+        Object.entries(inputs).map(async ([key, value]) => [key, await resolve(value)]),
+      ),
+    );
   }
 
   /** Cites a source, reusing one already on the desk (by DOI, or by title without one). */
@@ -200,10 +232,8 @@ export class ClaimSeeder {
     return attachment.id;
   }
 
-  private async actor(email: string): Promise<AuthenticatedUser> {
-    const user = await this.context.get(UsersService).findByEmail(email);
-    if (!user) throw new Error(`Seed the person ${email} before the claims that name them`);
-    return { id: user.id, email: user.email, displayName: user.displayName, role: user.role };
+  private actor(email: string): Promise<AuthenticatedUser> {
+    return seedActor(this.context, email);
   }
 }
 

@@ -7,9 +7,11 @@ import { loadEnvFile } from '../config/load-env-file';
 import { dataSourceFromEnv } from '../database/data-source-from-env';
 import { UsersService } from '../users/users.service';
 import { ClaimSeeder, type SeedClaim } from './claim-seeder';
+import { seedDataset, type SeedDataset } from './dataset-seeder';
 import { SeedingModule } from './seeding.module';
 
 export type { SeedClaim, SeedFile } from './claim-seeder';
+export type { SeedDataset } from './dataset-seeder';
 
 /**
  * A bare connection to the API's database (the DB_* variables, or apps/api/.env), no
@@ -30,7 +32,8 @@ export interface SeedPerson {
 /**
  * What the demo seed (seeds-demo) may do to the database, through the same services the
  * API uses, so seeded data obeys the same rules. Every method is idempotent, keyed by a
- * natural id (e-mail for people, the summary for claims): what exists already is left alone.
+ * natural id (e-mail for people, the summary for claims, the name for datasets): what
+ * exists already is left alone.
  */
 export class SeedingContext {
   private constructor(private readonly context: INestApplicationContext) {}
@@ -60,6 +63,11 @@ export class SeedingContext {
   /** Files a claim and does to it what the spec says, unless one with its summary exists. */
   claim(claim: SeedClaim): Promise<{ id: string; created: boolean }> {
     return new ClaimSeeder(this.context).seed(claim);
+  }
+
+  /** Imports a dataset from its CSV, unless one with its name exists. */
+  dataset(dataset: SeedDataset): Promise<{ id: string; created: boolean }> {
+    return seedDataset(this.context, dataset);
   }
 
   close(): Promise<void> {

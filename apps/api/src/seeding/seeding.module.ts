@@ -3,6 +3,7 @@ import { coreImports } from '../app.module';
 import { AttachmentsModule } from '../attachments/attachments.module';
 import { ClaimantsModule } from '../claimants/claimants.module';
 import { ClaimsModule } from '../claims/claims.module';
+import { DatasetsModule } from '../datasets/datasets.module';
 import { SourcesModule } from '../sources/sources.module';
 import { UsersModule } from '../users/users.module';
 
@@ -19,6 +20,7 @@ export class SeedingModule {
         ClaimsModule,
         SourcesModule,
         AttachmentsModule,
+        DatasetsModule,
       ],
     };
   }

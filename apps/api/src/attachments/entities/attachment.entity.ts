@@ -5,7 +5,7 @@ import { CreatedAt } from '../../database/columns';
 import { User } from '../../users/entities/user.entity';
 
 /**
- * An evidence file on a claim. The bytes live in storage under their SHA-256, so the same
+ * An evidence file on a claim, or the file behind a dataset (no claim). The bytes live in storage under their SHA-256, so the same
  * file uploaded twice is stored once; each upload keeps its own row and name.
  */
 @Entity('attachments')
@@ -15,10 +15,10 @@ export class Attachment {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
-  @Column({ name: 'claim_id', type: 'uuid' })
-  claimId: string;
+  @Column({ name: 'claim_id', type: 'uuid', nullable: true })
+  claimId: string | null;
 
-  @ManyToOne(() => Claim, { nullable: false })
+  @ManyToOne(() => Claim, { nullable: true })
   @JoinColumn({ name: 'claim_id' })
   claim: Relation<Claim>;
 

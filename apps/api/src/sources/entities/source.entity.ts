@@ -4,26 +4,14 @@ import {
   type ReliabilityGrade,
   type SourceKind,
 } from '@skyledger/contracts';
-import {
-  Column,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  VersionColumn,
-} from 'typeorm';
-import { CreatedAt, UpdatedAt } from '../../database/columns';
-import { User } from '../../users/entities/user.entity';
+import { Column, Entity, Index } from 'typeorm';
+import { AuthoredRecord } from '../../database/authored-record';
 
 /** A piece of evidence with its citation and grade; one source can serve several claims. */
 @Entity('sources')
 @Index('IDX_sources_doi', ['doi'])
 @Index('IDX_sources_title', ['title'])
-export class Source {
-  @PrimaryGeneratedColumn('uuid')
-  id: string;
-
+export class Source extends AuthoredRecord {
   @Column({ type: 'varchar', length: 300 })
   title: string;
 
@@ -53,20 +41,4 @@ export class Source {
 
   @Column({ name: 'grade_reason', type: 'text' })
   gradeReason: string;
-
-  @Column({ name: 'created_by_id', type: 'uuid' })
-  createdById: string;
-
-  @ManyToOne(() => User, { nullable: false })
-  @JoinColumn({ name: 'created_by_id' })
-  createdBy: User;
-
-  @CreatedAt()
-  createdAt: Date;
-
-  @UpdatedAt()
-  updatedAt: Date;
-
-  @VersionColumn()
-  version: number;
 }
