@@ -10,6 +10,7 @@ const esmPackages = [
   '@tokenizer',
   'uint8array-extras',
   'meilisearch',
+  'happy-dom',
   '@borewit',
 ];
 

@@ -9,6 +9,9 @@ import { join, resolve } from 'node:path';
 import { AttachmentsModule } from './attachments/attachments.module';
 import { CalculatorsModule } from './calculators/calculators.module';
 import { DatasetsModule } from './datasets/datasets.module';
+import { ClaimLifeModule } from './claim-life/claim-life.module';
+import { RatingsModule } from './ratings/ratings.module';
+import { VerdictsModule } from './verdicts/verdicts.module';
 import { AuditModule } from './audit/audit.module';
 import { AppearancesModule } from './appearances/appearances.module';
 import { AuthModule } from './auth/auth.module';
@@ -99,6 +102,9 @@ export class AppModule {
         CalculatorsModule,
         DatasetsModule,
         WorkingsModule,
+        ClaimLifeModule,
+        RatingsModule,
+        VerdictsModule,
         SearchModule,
       ],
       providers: [

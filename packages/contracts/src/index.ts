@@ -16,3 +16,6 @@ export * from './comments.js';
 export * from './search.js';
 export * from './datasets.js';
 export * from './workings.js';
+export * from './rating-scale.js';
+export * from './verdicts.js';
+export * from './notifications.js';

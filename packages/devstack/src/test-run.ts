@@ -75,6 +75,7 @@ export async function runAllTests(): Promise<number> {
 
     tallies.push(suite('calc-library', join(repoRoot, 'calc-library'), bin('vitest'), ['run']));
     tallies.push(suite('contracts', join(repoRoot, 'packages/contracts'), bin('vitest'), ['run']));
+    tallies.push(suite('explainer', join(repoRoot, 'packages/explainer'), bin('vitest'), ['run']));
     tallies.push(suite('seeds-demo', join(repoRoot, 'seeds-demo'), bin('vitest'), ['run']));
     tallies.push(suite('web', join(repoRoot, 'apps/web'), bin('vitest'), ['run']));
     tallies.push(suite('api unit', join(repoRoot, 'apps/api'), bin('jest'), []));

@@ -6,7 +6,7 @@ import { AuditService } from '../audit/audit.service';
 import { type AuthenticatedUser } from '../auth/authenticated-user';
 import { ApiError } from '../common/errors/api-error';
 import { appConfig, type AppConfig } from '../config/configuration';
-import { OutboxService } from '../mail/outbox.service';
+import { NotificationsService } from '../mail/notifications.service';
 import { OutboxWorker } from '../mail/outbox.worker';
 import { claimAssignedMail } from '../mail/templates/claim-assigned.mail';
 import { SearchIndexService } from '../search/search-index.service';
@@ -26,7 +26,7 @@ export class ClaimAssignmentService {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly claims: ClaimsService,
     private readonly audit: AuditService,
-    private readonly outbox: OutboxService,
+    private readonly notifications: NotificationsService,
     private readonly outboxWorker: OutboxWorker,
     private readonly searchIndex: SearchIndexService,
     @Inject(appConfig.KEY) private readonly app: AppConfig,
@@ -76,14 +76,15 @@ export class ClaimAssignmentService {
         },
       });
       if (assignee && assignee.id !== actor.id) {
-        const mail = claimAssignedMail({
-          displayName: assignee.displayName,
-          assignedBy: actor.displayName,
-          summary: claim.summary,
-          url: `${this.app.appUrl}/claims/${claim.id}`,
-        });
-        await this.outbox.enqueue(manager, { kind: 'claim-assigned', to: assignee.email, ...mail });
-        mailed = true;
+        const queued = await this.notifications.notify(manager, 'claim_assigned', [assignee], () =>
+          claimAssignedMail({
+            displayName: assignee.displayName,
+            assignedBy: actor.displayName,
+            summary: claim.summary,
+            url: `${this.app.appUrl}/claims/${claim.id}`,
+          }),
+        );
+        mailed = queued > 0;
       }
     });
     if (mailed) this.outboxWorker.nudge();

@@ -13,12 +13,10 @@ import { UuidParam } from '../common/decorators/uuid-param.decorator';
 import { SimilarClaimsQueryDto } from '../search/dto/similar-claims-query.dto';
 import { SearchService } from '../search/search.service';
 import { ClaimAssignmentService } from './claim-assignment.service';
-import { ClaimLifeService } from './claim-life.service';
 import { claimRoles } from './claim-policy';
 import { ClaimsService } from './claims.service';
 import { AssignClaimDto } from './dto/assign-claim.dto';
 import { ClaimQueueQueryDto } from './dto/claim-queue-query.dto';
-import { ClaimTransitionDto } from './dto/claim-transition.dto';
 import { CreateClaimDto } from './dto/create-claim.dto';
 import { UpdateClaimDto } from './dto/update-claim.dto';
 
@@ -30,7 +28,6 @@ export class ClaimsController {
   constructor(
     private readonly claims: ClaimsService,
     private readonly assignment: ClaimAssignmentService,
-    private readonly life: ClaimLifeService,
     private readonly search: SearchService,
   ) {}
 
@@ -81,17 +78,6 @@ export class ClaimsController {
     @Body() dto: AssignClaimDto,
   ): Promise<ClaimDetail> {
     return this.assignment.assign(actor, id, dto);
-  }
-
-  /** Moves the claim along its life (for now: a desk chief sets it aside, with a reason). */
-  @Post(':id/transitions')
-  @HttpCode(HttpStatus.OK)
-  transition(
-    @CurrentUser() actor: AuthenticatedUser,
-    @UuidParam() id: string,
-    @Body() dto: ClaimTransitionDto,
-  ): Promise<ClaimDetail> {
-    return this.life.transition(actor, id, dto);
   }
 
   /** The claim's audit events, oldest first, including those of its parts and its sources. */

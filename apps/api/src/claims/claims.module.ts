@@ -6,7 +6,6 @@ import { ClaimantsModule } from '../claimants/claimants.module';
 import { MailModule } from '../mail/mail.module';
 import { ClaimAssignmentService } from './claim-assignment.service';
 import { ClaimDetailsReader } from './claim-details.reader';
-import { ClaimLifeService } from './claim-life.service';
 import { ClaimPartsService } from './claim-parts.service';
 import { ClaimsController } from './claims.controller';
 import { ClaimsService } from './claims.service';
@@ -21,13 +20,7 @@ import { Claim } from './entities/claim.entity';
     ClaimantsModule,
   ],
   controllers: [ClaimsController],
-  providers: [
-    ClaimsService,
-    ClaimDetailsReader,
-    ClaimAssignmentService,
-    ClaimLifeService,
-    ClaimPartsService,
-  ],
+  providers: [ClaimsService, ClaimDetailsReader, ClaimAssignmentService, ClaimPartsService],
   exports: [ClaimsService, ClaimPartsService],
 })
 export class ClaimsModule {}

@@ -15,6 +15,10 @@ import { Source } from '../sources/entities/source.entity';
 import { OneTimeToken } from '../users/entities/one-time-token.entity';
 import { User } from '../users/entities/user.entity';
 import { Working } from '../workings/entities/working.entity';
+import { RatingLevel } from '../ratings/entities/rating-level.entity';
+import { SignoffDecisionRecord } from '../verdicts/entities/signoff-decision.entity';
+import { VerdictConflict } from '../verdicts/entities/verdict-conflict.entity';
+import { VerdictVersion } from '../verdicts/entities/verdict-version.entity';
 
 /** Every entity, listed once for the app and the migration CLI. */
 export const entities = [
@@ -35,4 +39,8 @@ export const entities = [
   Comment,
   Dataset,
   Working,
+  RatingLevel,
+  VerdictVersion,
+  SignoffDecisionRecord,
+  VerdictConflict,
 ];

@@ -21,7 +21,7 @@ import { stageStream, stagingDirectory } from '../attachments/staged-upload';
 import { type AuthenticatedUser } from '../auth/authenticated-user';
 import { Claimant } from '../claimants/entities/claimant.entity';
 import { ClaimAssignmentService } from '../claims/claim-assignment.service';
-import { ClaimLifeService } from '../claims/claim-life.service';
+import { ClaimLifeService } from '../claim-life/claim-life.service';
 import { ClaimPartsService } from '../claims/claim-parts.service';
 import { ClaimsService } from '../claims/claims.service';
 import { Claim } from '../claims/entities/claim.entity';

@@ -2,6 +2,7 @@ import { Module, type DynamicModule } from '@nestjs/common';
 import { coreImports } from '../app.module';
 import { AttachmentsModule } from '../attachments/attachments.module';
 import { ClaimantsModule } from '../claimants/claimants.module';
+import { ClaimLifeModule } from '../claim-life/claim-life.module';
 import { ClaimsModule } from '../claims/claims.module';
 import { DatasetsModule } from '../datasets/datasets.module';
 import { SourcesModule } from '../sources/sources.module';
@@ -18,6 +19,7 @@ export class SeedingModule {
         UsersModule,
         ClaimantsModule,
         ClaimsModule,
+        ClaimLifeModule,
         SourcesModule,
         AttachmentsModule,
         DatasetsModule,

@@ -15,7 +15,7 @@ import {
   VersionColumn,
 } from 'typeorm';
 import { Claimant } from '../../claimants/entities/claimant.entity';
-import { CreatedAt, UpdatedAt } from '../../database/columns';
+import { CreatedAt, UpdatedAt, instantColumn } from '../../database/columns';
 import { User } from '../../users/entities/user.entity';
 import { ClaimTopic } from './claim-topic.entity';
 
@@ -76,6 +76,20 @@ export class Claim {
 
   @Column({ name: 'set_aside_note', type: 'text', nullable: true })
   setAsideNote: string | null;
+
+  /** Set when a desk chief waives the right of reply, with the reason. */
+  @Column({ name: 'reply_waiver_reason', type: 'text', nullable: true })
+  replyWaiverReason: string | null;
+
+  @Column({ name: 'reply_waived_by_id', type: 'uuid', nullable: true })
+  replyWaivedById: string | null;
+
+  @ManyToOne(() => User, { nullable: true })
+  @JoinColumn({ name: 'reply_waived_by_id' })
+  replyWaivedBy: User | null;
+
+  @Column(instantColumn({ name: 'reply_waived_at', nullable: true }))
+  replyWaivedAt: Date | null;
 
   @OneToMany(() => ClaimTopic, (topic) => topic.claim, { cascade: ['insert'] })
   topics: ClaimTopic[];

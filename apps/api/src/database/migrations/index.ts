@@ -2,6 +2,7 @@ import { Initial1796165154418 } from './1796165154418-Initial';
 import { ClaimsDesk1796174782267 } from './1796174782267-ClaimsDesk';
 import { QueueSortIndexes1796219054468 } from './1796219054468-QueueSortIndexes';
 import { WorkingsAndDatasets1796219107240 } from './1796219107240-WorkingsAndDatasets';
+import { Verdicts1796220519301 } from './1796220519301-Verdicts';
 
 /** Every migration in order, listed by class so the same list works from dist/ and under Jest. */
 export const migrations = [
@@ -9,4 +10,5 @@ export const migrations = [
   ClaimsDesk1796174782267,
   QueueSortIndexes1796219054468,
   WorkingsAndDatasets1796219107240,
+  Verdicts1796220519301,
 ];

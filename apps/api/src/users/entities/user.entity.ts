@@ -1,4 +1,10 @@
-import { roles, userStatuses, type Role, type UserStatus } from '@skyledger/contracts';
+import {
+  roles,
+  userStatuses,
+  type NotificationKind,
+  type Role,
+  type UserStatus,
+} from '@skyledger/contracts';
 import { Column, Entity, Index, PrimaryGeneratedColumn, VersionColumn } from 'typeorm';
 import { CreatedAt, UpdatedAt, instantColumn } from '../../database/columns';
 
@@ -33,6 +39,10 @@ export class User {
 
   @Column(instantColumn({ name: 'last_sign_in_at', nullable: true }))
   lastSignInAt: Date | null;
+
+  /** The kinds of notification mail this person turned off; null when none. */
+  @Column({ name: 'notifications_off', type: 'json', nullable: true })
+  notificationsOff: NotificationKind[] | null;
 
   @CreatedAt()
   createdAt: Date;

@@ -46,6 +46,6 @@ export class Working extends ClaimPart {
   note: string | null;
 
   /** When the server last ran it again with the library then current. */
-  @Column({ name: 'checked_at', ...instantColumn({ nullable: true }) })
+  @Column(instantColumn({ name: 'checked_at', nullable: true }))
   checkedAt: Date | null;
 }

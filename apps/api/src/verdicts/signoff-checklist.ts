@@ -1,0 +1,127 @@
+import {
+  reliabilityGradeLabels,
+  replyChannelLabels,
+  type ChecklistItem,
+  type WorkingOutput,
+} from '@skyledger/contracts';
+import { isEmptyExplainer } from '@skyledger/explainer';
+import { type EntityManager } from 'typeorm';
+import { type Claim } from '../claims/entities/claim.entity';
+import { ReplyAttempt } from '../reply-attempts/entities/reply-attempt.entity';
+import { ClaimSource } from '../sources/entities/claim-source.entity';
+import { User } from '../users/entities/user.entity';
+import { Working } from '../workings/entities/working.entity';
+import { runCalculation } from '../workings/run-calculation';
+import { outputDifferences } from '../workings/workings.service';
+import { type VerdictVersion } from './entities/verdict-version.entity';
+
+const item = (key: ChecklistItem['key'], label: string, done: boolean, detail: string) => ({
+  key,
+  label,
+  done,
+  detail,
+});
+
+/** Whether the claim's workings give today what they gave when saved, recomputed now. */
+async function workingsItem(manager: EntityManager, claimId: string): Promise<ChecklistItem> {
+  const label = 'Every working recomputed by the server';
+  const workings = await manager.find(Working, { where: { claimId }, order: { createdAt: 'ASC' } });
+  if (workings.length === 0)
+    return item('workingsRecomputed', label, true, 'No workings on this claim');
+  const differing: string[] = [];
+  for (const working of workings) {
+    try {
+      const { result } = await runCalculation(null, working.calculatorId, working.inputs);
+      const outputs = result.outputs as unknown as Record<string, WorkingOutput>;
+      if (outputDifferences(working.outputs as Record<string, WorkingOutput>, outputs).length) {
+        differing.push(working.calculatorId);
+      }
+    } catch {
+      differing.push(working.calculatorId);
+    }
+  }
+  return differing.length
+    ? item(
+        'workingsRecomputed',
+        label,
+        false,
+        `Recomputed now, ${differing.length} of ${workings.length} differ (${differing.join(', ')}): re-run them and check the explainer`,
+      )
+    : item(
+        'workingsRecomputed',
+        label,
+        true,
+        `All ${workings.length} recomputed now and unchanged`,
+      );
+}
+
+/**
+ * The sign-off checklist of a claim and its verdict version, worked out now from the
+ * records (the workings recomputed afresh). Clearing is refused while an item is open.
+ */
+export async function signoffChecklist(
+  manager: EntityManager,
+  claim: Claim,
+  version: VerdictVersion | null,
+): Promise<ChecklistItem[]> {
+  const complete =
+    version !== null &&
+    version.ratingId !== null &&
+    version.bottomLine.trim() !== '' &&
+    !isEmptyExplainer(version.body);
+
+  const primary = version?.primarySourceId
+    ? await manager.findOne(ClaimSource, {
+        where: { claimId: claim.id, sourceId: version.primarySourceId },
+        relations: { source: true },
+      })
+    : null;
+  const primaryDone = primary !== null && ['strong', 'adequate'].includes(primary.source.grade);
+
+  const attempts = await manager.find(ReplyAttempt, {
+    where: { claimId: claim.id },
+    order: { contactedAt: 'DESC' },
+  });
+  const waiver = claim.replyWaiverReason
+    ? await manager.findOneBy(User, { id: claim.replyWaivedById ?? '' })
+    : null;
+  const latest = attempts[0];
+
+  return [
+    item(
+      'verdictComplete',
+      'Rating, bottom line and explainer written',
+      complete,
+      complete
+        ? 'All three are there'
+        : 'The verdict needs a rating, a bottom line and an explainer',
+    ),
+    item(
+      'primarySource',
+      'A primary source for the central finding',
+      primaryDone,
+      primary
+        ? `${primary.source.title} (${reliabilityGradeLabels[primary.source.grade].toLowerCase()})${primaryDone ? '' : ': grade it strong or adequate, or choose another'}`
+        : 'Choose the source that backs the central finding',
+    ),
+    item(
+      'rightOfReply',
+      'Right of reply logged or waived',
+      latest !== undefined || claim.replyWaiverReason !== null,
+      latest
+        ? `${attempts.length} attempt${attempts.length === 1 ? '' : 's'} logged, the latest by ${replyChannelLabels[latest.channel].toLowerCase()} to ${latest.contacted}`
+        : claim.replyWaiverReason
+          ? `Waived by ${waiver?.displayName ?? 'a desk chief'}: ${claim.replyWaiverReason}`
+          : 'Log an attempt to reach the claimant, or ask a desk chief to waive it with a reason',
+    ),
+    await workingsItem(manager, claim.id),
+    item(
+      'legalReview',
+      'Legal-review flag cleared',
+      !claim.legalReview,
+      claim.legalReview
+        ? 'Flagged for legal review: a desk chief clears the flag once the newsroom’s counsel has seen it'
+        : 'Not flagged',
+    ),
+  ];
+}

@@ -1,0 +1,1 @@
+export { renderExplainerHtml, sanitizeExplainerHtml } from './render-explainer.js';
