@@ -19,3 +19,4 @@ export * from './workings.js';
 export * from './rating-scale.js';
 export * from './verdicts.js';
 export * from './notifications.js';
+export * from './desk-records.js';

@@ -1,7 +1,12 @@
-import { Controller, Get } from '@nestjs/common';
+import { Body, Controller, Get, Put } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { type CurrentUser as CurrentUserBody } from '@skyledger/contracts';
+import {
+  type CurrentUser as CurrentUserBody,
+  type NotificationSettingsView,
+} from '@skyledger/contracts';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { UpdateNotificationSettingsDto } from '../users/dto/update-notification-settings.dto';
+import { NotificationSettingsService } from '../users/notification-settings.service';
 import { UsersService } from '../users/users.service';
 import { toCurrentUser } from '../users/user-views';
 import { type AuthenticatedUser } from './authenticated-user';
@@ -10,10 +15,28 @@ import { type AuthenticatedUser } from './authenticated-user';
 @ApiBearerAuth()
 @Controller('me')
 export class MeController {
-  constructor(private readonly users: UsersService) {}
+  constructor(
+    private readonly users: UsersService,
+    private readonly notifications: NotificationSettingsService,
+  ) {}
 
   @Get()
   async me(@CurrentUser() user: AuthenticatedUser): Promise<CurrentUserBody> {
     return toCurrentUser(await this.users.findById(user.id));
+  }
+
+  /** Which notification mails I get. */
+  @Get('notifications')
+  notificationSettings(@CurrentUser() user: AuthenticatedUser): Promise<NotificationSettingsView> {
+    return this.notifications.view(user.id);
+  }
+
+  /** Turns kinds of notification mail off (those listed) and on (the rest). */
+  @Put('notifications')
+  updateNotificationSettings(
+    @CurrentUser() user: AuthenticatedUser,
+    @Body() dto: UpdateNotificationSettingsDto,
+  ): Promise<NotificationSettingsView> {
+    return this.notifications.update(user.id, dto.disabled);
   }
 }

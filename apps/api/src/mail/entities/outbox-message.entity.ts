@@ -1,8 +1,6 @@
+import { outboxStates, type OutboxState } from '@skyledger/contracts';
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 import { CreatedAt, UpdatedAt, instantColumn } from '../../database/columns';
-
-export const outboxStates = ['pending', 'sending', 'sent', 'failed'] as const;
-export type OutboxState = (typeof outboxStates)[number];
 
 /**
  * An e-mail waiting to be delivered. Rows are written in the same transaction as the
