@@ -11,15 +11,18 @@ const esmPackages = [
   'uint8array-extras',
   'meilisearch',
   'happy-dom',
+  'feed',
   '@borewit',
+  'parse5',
+  'entities',
 ];
 
 /** @type {import('jest').Config} */
 module.exports = {
   rootDir: __dirname,
   testEnvironment: 'node',
-  testRegex: 'src/.*\\.spec\\.ts$',
-  moduleFileExtensions: ['ts', 'js', 'json'],
+  testRegex: 'src/.*\\.spec\\.tsx?$',
+  moduleFileExtensions: ['ts', 'tsx', 'js', 'json'],
   transformIgnorePatterns: [`/node_modules/(?!(${esmPackages.join('|')})/)`],
   transform: {
     // swc rather than ts-jest: it emits CommonJS for every file, including the ES-module
@@ -32,6 +35,18 @@ module.exports = {
           transform: { legacyDecorator: true, decoratorMetadata: true },
           target: 'es2022',
           keepClassNames: true,
+        },
+        module: { type: 'commonjs' },
+      },
+    ],
+    // The reader pages are React components rendered to HTML on the server.
+    '^.+\\.tsx$': [
+      '@swc/jest',
+      {
+        jsc: {
+          parser: { syntax: 'typescript', tsx: true },
+          transform: { react: { runtime: 'automatic' } },
+          target: 'es2022',
         },
         module: { type: 'commonjs' },
       },

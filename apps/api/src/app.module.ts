@@ -12,6 +12,8 @@ import { DatasetsModule } from './datasets/datasets.module';
 import { ClaimLifeModule } from './claim-life/claim-life.module';
 import { RatingsModule } from './ratings/ratings.module';
 import { VerdictsModule } from './verdicts/verdicts.module';
+import { PublishingModule } from './publishing/publishing.module';
+import { ReaderModule } from './reader/reader.module';
 import { AuditModule } from './audit/audit.module';
 import { AppearancesModule } from './appearances/appearances.module';
 import { AuthModule } from './auth/auth.module';
@@ -33,6 +35,7 @@ import {
   mailConfig,
   searchConfig,
   storageConfig,
+  publishingConfig,
   type DatabaseConfig,
 } from './config/configuration';
 import { validateEnv } from './config/env.schema';
@@ -62,7 +65,15 @@ export function coreImports(): Array<DynamicModule | Promise<DynamicModule>> {
       // main.ts and the command-line tools load apps/api/.env themselves, before this runs.
       ignoreEnvFile: true,
       validate: validateEnv,
-      load: [appConfig, databaseConfig, authConfig, mailConfig, searchConfig, storageConfig],
+      load: [
+        appConfig,
+        databaseConfig,
+        authConfig,
+        mailConfig,
+        searchConfig,
+        storageConfig,
+        publishingConfig,
+      ],
     }),
     LoggerModule.forRoot({
       pinoHttp: {
@@ -105,6 +116,8 @@ export class AppModule {
         ClaimLifeModule,
         RatingsModule,
         VerdictsModule,
+        PublishingModule,
+        ReaderModule,
         SearchModule,
       ],
       providers: [

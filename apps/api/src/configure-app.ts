@@ -19,7 +19,9 @@ export function configureApp(app: INestApplication): INestApplication {
           defaultSrc: ["'self'"],
           scriptSrc: ["'self'"],
           styleSrc: ["'self'", "'unsafe-inline'"],
-          imgSrc: ["'self'", 'data:'],
+          // blob: for previews of evidence files the desk fetches with its token.
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          frameSrc: ["'self'", 'blob:'],
           fontSrc: ["'self'"],
           connectSrc: ["'self'"],
           objectSrc: ["'none'"],

@@ -156,11 +156,11 @@ describe('verdicts, the claim life and sign-off', () => {
       expect(response.status).toBe(200);
       const levels = response.body as RatingLevelView[];
       expect(levels.map((level) => [level.id, level.number, level.label, level.isRating])).toEqual([
-        ['holds-up', 1, 'Holds up', true],
-        ['holds-with-caveats', 2, 'Holds up with caveats', true],
+        ['holds-up', 5, 'Holds up', true],
+        ['holds-with-caveats', 4, 'Holds up with caveats', true],
         ['stretched', 3, 'Stretched', true],
-        ['unfounded', 4, 'Unfounded', true],
-        ['contradicted', 5, 'Contradicted by evidence', true],
+        ['unfounded', 2, 'Unfounded', true],
+        ['contradicted', 1, 'Contradicted by evidence', true],
         ['not-checkable', null, 'Not checkable', false],
       ]);
     });

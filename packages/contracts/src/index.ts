@@ -20,3 +20,4 @@ export * from './rating-scale.js';
 export * from './verdicts.js';
 export * from './notifications.js';
 export * from './desk-records.js';
+export * from './reader.js';

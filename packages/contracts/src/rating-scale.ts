@@ -11,7 +11,7 @@ export const ratingLevelIdSchema = z
 /** The desk's rating scale is data: a desk chief edits the words, and may add a level. */
 export interface RatingLevelView {
   id: string;
-  /** Its number on the scale (1 = holds up best); null for a non-rating outcome. */
+  /** Its number on the scale (the highest holds up best); null for a non-rating outcome. */
   number: number | null;
   label: string;
   description: string;

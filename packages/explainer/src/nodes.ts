@@ -1,5 +1,9 @@
 import { mergeAttributes, Node } from '@tiptap/core';
 
+/** Reads an attribute without needing the DOM typings (the API compiles without them). */
+const attribute = (element: unknown, name: string) =>
+  (element as { getAttribute(name: string): string | null }).getAttribute(name);
+
 /**
  * A working of the claim, embedded by id. The document keeps only the id: whoever shows
  * the explainer draws the working from the stored one, so the text can never disagree
@@ -14,7 +18,7 @@ export const WorkingEmbed = Node.create({
     return {
       workingId: {
         default: null,
-        parseHTML: (element) => element.getAttribute('data-working-id'),
+        parseHTML: (element) => attribute(element, 'data-working-id'),
         renderHTML: (attributes) => ({ 'data-working-id': attributes.workingId as string }),
       },
     };
@@ -40,7 +44,7 @@ export const SourceCitation = Node.create({
     return {
       sourceId: {
         default: null,
-        parseHTML: (element) => element.getAttribute('data-source-id'),
+        parseHTML: (element) => attribute(element, 'data-source-id'),
         renderHTML: (attributes) => ({ 'data-source-id': attributes.sourceId as string }),
       },
     };

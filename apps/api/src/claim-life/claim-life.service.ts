@@ -80,8 +80,10 @@ export class ClaimLifeService {
       roles: ['copy_desk', 'desk_chief'],
       run: (context) => this.clear(context),
     },
+    // Back into research: after a send-back, or to correct a published explainer (its
+    // page stays as published until the corrected version is cleared and published).
     in_research: {
-      from: ['sent_back'],
+      from: ['sent_back', 'published'],
       roles: ['science_editor', 'desk_chief'],
       run: () => Promise.resolve(),
     },

@@ -70,6 +70,11 @@ export const searchConfig = registerAs('search', () => {
   };
 });
 
+export const publishingConfig = registerAs('publishing', () => {
+  const env = validateEnv(process.env);
+  return { pollMs: env.PUBLISH_POLL_MS, schedulerEnabled: env.PUBLISHER_ENABLED };
+});
+
 export const storageConfig = registerAs('storage', () => {
   const env = validateEnv(process.env);
   const credentials =
@@ -98,3 +103,4 @@ export type AuthConfig = ConfigType<typeof authConfig>;
 export type MailConfig = ConfigType<typeof mailConfig>;
 export type SearchConfig = ConfigType<typeof searchConfig>;
 export type StorageConfig = ConfigType<typeof storageConfig>;
+export type PublishingConfig = ConfigType<typeof publishingConfig>;

@@ -58,6 +58,9 @@ export const envSchema = databaseEnvSchema
       .regex(/^[A-Za-z0-9_-]+$/, { error: 'letters, digits, - and _ only' })
       .default('skyledger'),
 
+    PUBLISH_POLL_MS: int(100, 600_000).default(5000),
+    PUBLISHER_ENABLED: bool.default(true),
+
     FILES_STORAGE: z.enum(['local', 's3']).default('local'),
     FILES_DIR: z.string().min(1).optional(),
     UPLOAD_MAX_BYTES: int(1, 1024 ** 3).default(20 * 1024 ** 2),

@@ -15,6 +15,8 @@ import { Source } from '../sources/entities/source.entity';
 import { OneTimeToken } from '../users/entities/one-time-token.entity';
 import { User } from '../users/entities/user.entity';
 import { Working } from '../workings/entities/working.entity';
+import { Publication } from '../publishing/entities/publication.entity';
+import { ReaderSubscription } from '../publishing/entities/reader-subscription.entity';
 import { RatingLevel } from '../ratings/entities/rating-level.entity';
 import { SignoffDecisionRecord } from '../verdicts/entities/signoff-decision.entity';
 import { VerdictConflict } from '../verdicts/entities/verdict-conflict.entity';
@@ -43,4 +45,6 @@ export const entities = [
   VerdictVersion,
   SignoffDecisionRecord,
   VerdictConflict,
+  Publication,
+  ReaderSubscription,
 ];

@@ -36,7 +36,7 @@ export class RatingsService {
       ).map((row) => row.ratingId),
     );
     return levels
-      .sort((a, b) => (a.number ?? 99) - (b.number ?? 99) || a.id.localeCompare(b.id))
+      .sort((a, b) => (b.number ?? -1) - (a.number ?? -1) || a.id.localeCompare(b.id))
       .map((level) => ({
         id: level.id,
         number: level.number,

@@ -2,6 +2,8 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, In, type FindOptionsWhere } from 'typeorm';
 import { Claim } from '../claims/entities/claim.entity';
+import { explainerPlainText } from '@skyledger/explainer';
+import { Publication } from '../publishing/entities/publication.entity';
 import { Source } from '../sources/entities/source.entity';
 import { documentId, type SearchDocument } from './search-document';
 
@@ -48,6 +50,32 @@ export function sourceDocument(source: Source): SearchDocument {
   };
 }
 
+/** A published explainer, as readers may find it: the latest publication of a claim. */
+export function explainerDocument(publication: Publication): SearchDocument {
+  const { claim, verdictVersion: version } = publication;
+  const topicList = claim.topics.map((topic) => topic.topic).sort();
+  return {
+    id: documentId('explainer', claim.id),
+    type: 'explainer',
+    entityId: claim.id,
+    title: claim.summary,
+    text: version.bottomLine,
+    claimant:
+      claim.claimant.nameShownPublicly || claim.claimant.kind !== 'private_individual'
+        ? claim.claimant.name
+        : '',
+    topics: topicList.join(' '),
+    topicList,
+    authors: '',
+    publisher: '',
+    body: explainerPlainText(version.body),
+    status: 'published',
+    rating: version.ratingId,
+    date: publication.publishedAt!.getTime(),
+    audience: 'public',
+  };
+}
+
 /** Reads what the search index holds from MariaDB: everything, or the records that changed. */
 @Injectable()
 export class SearchDocumentsReader {
@@ -66,6 +94,15 @@ export class SearchDocumentsReader {
     return sources.map(sourceDocument);
   }
 
+  /** The latest publication of each of these claims, as explainer documents. */
+  async explainers(claimIds: string[]): Promise<SearchDocument[]> {
+    if (claimIds.length === 0) return [];
+    const publications = await this.latestPublications()
+      .andWhere('p.claim_id IN (:...claimIds)', { claimIds })
+      .getMany();
+    return publications.map(explainerDocument);
+  }
+
   /** Every document, read in batches of 5 000 so memory stays flat at 100 000 claims. */
   async *all(): AsyncGenerator<SearchDocument[]> {
     for (let offset = 0; ; offset += BATCH) {
@@ -79,12 +116,36 @@ export class SearchDocumentsReader {
       yield claims.map(claimDocument);
     }
     for (let offset = 0; ; offset += BATCH) {
+      const publications = await this.latestPublications()
+        .orderBy('p.id', 'ASC')
+        .skip(offset)
+        .take(BATCH)
+        .getMany();
+      if (publications.length === 0) break;
+      yield publications.map(explainerDocument);
+    }
+    for (let offset = 0; ; offset += BATCH) {
       const sources = await this.dataSource
         .getRepository(Source)
         .find({ order: { id: 'ASC' }, skip: offset, take: BATCH });
       if (sources.length === 0) break;
       yield sources.map(sourceDocument);
     }
+  }
+
+  /** Published publications with no later published one for the same claim. */
+  private latestPublications() {
+    return this.dataSource
+      .getRepository(Publication)
+      .createQueryBuilder('p')
+      .innerJoinAndSelect('p.claim', 'claim')
+      .innerJoinAndSelect('claim.claimant', 'claimant')
+      .leftJoinAndSelect('claim.topics', 'topic')
+      .innerJoinAndSelect('p.verdictVersion', 'version')
+      .where("p.state = 'published'")
+      .andWhere(
+        "NOT EXISTS (SELECT 1 FROM publications later WHERE later.claim_id = p.claim_id AND later.state = 'published' AND later.sequence > p.sequence)",
+      );
   }
 
   private async readClaims(where: FindOptionsWhere<Claim>): Promise<SearchDocument[]> {

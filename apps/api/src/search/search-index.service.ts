@@ -45,6 +45,11 @@ export class SearchIndexService implements OnApplicationBootstrap {
     );
   }
 
+  /** A claim's explainer was published or updated. */
+  explainersChanged(claimIds: string[]): Promise<void> {
+    return this.refresh('explainer', claimIds, () => this.documents.explainers(claimIds));
+  }
+
   sourcesChanged(ids: string[]): Promise<void> {
     return this.refresh('source', ids, () => this.documents.sources(ids));
   }

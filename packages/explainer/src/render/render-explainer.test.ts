@@ -1,3 +1,4 @@
+import { type JSONContent } from '@tiptap/core';
 import { describe, expect, it } from 'vitest';
 import { citedSourceIds, cleanExplainerDocument, explainerPlainText } from '../document.js';
 import { explainerTemplate } from '../template.js';
@@ -7,12 +8,12 @@ const sourceA = '11111111-1111-4111-8111-111111111111';
 const sourceB = '22222222-2222-4222-8222-222222222222';
 const working = '33333333-3333-4333-8333-333333333333';
 
-const text = (value: string, marks?: unknown[]) => ({
+const text = (value: string, marks?: JSONContent['marks']): JSONContent => ({
   type: 'text',
   text: value,
   ...(marks ? { marks } : {}),
 });
-const paragraph = (...content: unknown[]) => ({ type: 'paragraph', content });
+const paragraph = (...content: JSONContent[]): JSONContent => ({ type: 'paragraph', content });
 
 describe('renderExplainerHtml', () => {
   it('renders the schema, numbering citations in order of first citation', () => {

@@ -1,4 +1,3 @@
-import { type JSONContent } from '@tiptap/core';
 import { generateHTML } from '@tiptap/html/server';
 import sanitizeHtml from 'sanitize-html';
 import { citedSourceIds, cleanExplainerDocument, isAllowedHref } from '../document.js';
@@ -66,7 +65,7 @@ export function sanitizeExplainerHtml(
  * An explainer as safe HTML: the document cleaned of anything outside the schema,
  * rendered with the same Tiptap extensions as the editor, then sanitized.
  */
-export function renderExplainerHtml(doc: JSONContent): string {
+export function renderExplainerHtml(doc: unknown): string {
   const cleaned = cleanExplainerDocument(doc);
   const numbers = new Map(citedSourceIds(cleaned).map((id, index) => [id, index + 1]));
   return sanitizeExplainerHtml(generateHTML(cleaned, explainerExtensions()), numbers);

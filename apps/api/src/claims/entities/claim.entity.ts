@@ -37,6 +37,11 @@ export class Claim {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
+  /** The stable part of its public address, set at its first publication. */
+  @Index('UQ_claims_slug', { unique: true })
+  @Column({ type: 'varchar', length: 100, nullable: true })
+  slug: string | null;
+
   /** The claim as said, word for word. */
   @Column({ type: 'text' })
   text: string;

@@ -17,9 +17,11 @@ export class Verdicts1796220519301 implements MigrationInterface {
             ) ENGINE = InnoDB
         `);
     // The default scale from PRODUCT.md, in the desk's own words; a desk chief edits it.
+    // Numbers rise with how well a claim holds up, as schema.org's Rating expects
+    // (bestRating is the highest value).
     await queryRunner.query(
       `INSERT INTO \`rating_levels\` (\`id\`, \`number\`, \`label\`, \`description\`, \`is_rating\`, \`version\`) VALUES
-                (?, 1, ?, ?, 1, 1), (?, 2, ?, ?, 1, 1), (?, 3, ?, ?, 1, 1), (?, 4, ?, ?, 1, 1), (?, 5, ?, ?, 1, 1), (?, NULL, ?, ?, 0, 1)`,
+                (?, 5, ?, ?, 1, 1), (?, 4, ?, ?, 1, 1), (?, 3, ?, ?, 1, 1), (?, 2, ?, ?, 1, 1), (?, 1, ?, ?, 1, 1), (?, NULL, ?, ?, 0, 1)`,
       [
         'holds-up',
         'Holds up',

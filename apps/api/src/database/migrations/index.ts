@@ -3,6 +3,7 @@ import { ClaimsDesk1796174782267 } from './1796174782267-ClaimsDesk';
 import { QueueSortIndexes1796219054468 } from './1796219054468-QueueSortIndexes';
 import { WorkingsAndDatasets1796219107240 } from './1796219107240-WorkingsAndDatasets';
 import { Verdicts1796220519301 } from './1796220519301-Verdicts';
+import { Publishing1796221845244 } from './1796221845244-Publishing';
 
 /** Every migration in order, listed by class so the same list works from dist/ and under Jest. */
 export const migrations = [
@@ -11,4 +12,5 @@ export const migrations = [
   QueueSortIndexes1796219054468,
   WorkingsAndDatasets1796219107240,
   Verdicts1796220519301,
+  Publishing1796221845244,
 ];

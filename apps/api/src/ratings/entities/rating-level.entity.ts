@@ -8,7 +8,7 @@ export class RatingLevel {
   @PrimaryColumn({ type: 'varchar', length: 40 })
   id: string;
 
-  /** Its number on the scale, 1 = holds up best; null for an outcome that is not a rating. */
+  /** Its number on the scale, higher = holds up better; null for an outcome that is not a rating. */
   @Column({ type: 'tinyint', unsigned: true, nullable: true })
   number: number | null;
 

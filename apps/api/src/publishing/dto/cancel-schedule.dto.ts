@@ -1,0 +1,6 @@
+import { VersionField } from '../../common/validation/fields';
+
+export class CancelScheduleDto {
+  @VersionField()
+  version: number;
+}

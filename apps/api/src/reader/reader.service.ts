@@ -1,0 +1,323 @@
+import { Inject, Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import {
+  reliabilityGradeLabels,
+  sourceKindLabels,
+  updateNoteKindLabels,
+  type ReaderCorrection,
+  type ReaderExplainer,
+  type ReaderExplainerSummary,
+  type ReaderRating,
+  type ReaderSite,
+  type ReaderSource,
+  type ReaderUpdateNote,
+} from '@skyledger/contracts';
+import { citedSourceIds, embeddedWorkingIds } from '@skyledger/explainer';
+import { DataSource, In } from 'typeorm';
+import { Appearance } from '../appearances/entities/appearance.entity';
+import { Attachment } from '../attachments/entities/attachment.entity';
+import { type Claimant } from '../claimants/entities/claimant.entity';
+import { Claim } from '../claims/entities/claim.entity';
+import { appConfig, type AppConfig } from '../config/configuration';
+import { Dataset } from '../datasets/entities/dataset.entity';
+import { Publication } from '../publishing/entities/publication.entity';
+import { explainerUrl, publicationUrl } from '../publishing/publication-view';
+import { READER_SITE_NAME } from '../publishing/reader-subscriptions.service';
+import { RatingLevel } from '../ratings/entities/rating-level.entity';
+import { ClaimSource } from '../sources/entities/claim-source.entity';
+import { Working } from '../workings/entities/working.entity';
+import { toReaderWorking } from './reader-working';
+
+export const READER_PAGE_SIZE = 20;
+
+/** What readers may see of a claimant: a private individual's name only when allowed. */
+export function claimantForReaders(claimant: Claimant) {
+  const hidden = claimant.kind === 'private_individual' && !claimant.nameShownPublicly;
+  return {
+    name: hidden ? null : claimant.name,
+    displayName: hidden ? 'A private individual' : claimant.name,
+    kind: claimant.kind,
+    affiliation: hidden ? null : claimant.affiliation,
+  };
+}
+
+/**
+ * The reader side's read models, built only from published publications whose time has
+ * come: nothing drafted, cleared, scheduled or embargoed is ever read here.
+ */
+@Injectable()
+export class ReaderService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    @Inject(appConfig.KEY) private readonly app: AppConfig,
+  ) {}
+
+  site(): ReaderSite {
+    return { name: READER_SITE_NAME, origin: this.app.appUrl, organisation: 'Skyledger newsroom' };
+  }
+
+  async ratings(): Promise<ReaderRating[]> {
+    const levels = await this.dataSource.manager.find(RatingLevel);
+    const numbers = levels.flatMap((level) => (level.number === null ? [] : [level.number]));
+    const [best, worst] = [Math.max(...numbers, 1), Math.min(...numbers, 1)];
+    return levels
+      .sort((a, b) => (b.number ?? -1) - (a.number ?? -1))
+      .map((level) => ({
+        id: level.id,
+        number: level.number,
+        label: level.label,
+        description: level.description,
+        isRating: level.isRating,
+        bestRating: best,
+        worstRating: worst,
+      }));
+  }
+
+  /** The explainer at `slug`: its latest publication, or publication `sequence`; null if none. */
+  async explainer(slug: string, sequence?: number): Promise<ReaderExplainer | null> {
+    const manager = this.dataSource.manager;
+    const claim = await manager.findOne(Claim, {
+      where: { slug },
+      relations: { claimant: true, topics: true },
+    });
+    if (!claim) return null;
+    const publications = await manager.find(Publication, {
+      where: { claimId: claim.id, state: 'published' },
+      relations: { verdictVersion: true },
+      order: { sequence: 'ASC' },
+    });
+    const visible = publications.filter(
+      (p) => p.publishedAt && p.publishedAt.getTime() <= Date.now(),
+    );
+    const latest = visible[visible.length - 1];
+    const shown = sequence === undefined ? latest : visible.find((p) => p.sequence === sequence);
+    if (!latest || !shown) return null;
+    const version = shown.verdictVersion;
+    const upToShown = visible.filter((p) => p.sequence <= shown.sequence);
+    const notes = this.notesOf(slug, upToShown).reverse();
+    const [ratings, sources, workings, appearances] = await Promise.all([
+      this.ratings(),
+      this.sources(claim.id, citedSourceIds(version.body)),
+      this.workings(claim.id, embeddedWorkingIds(version.body)),
+      this.appearances(claim.id, slug),
+    ]);
+    return {
+      slug,
+      url: explainerUrl(this.app.appUrl, slug),
+      versionUrl:
+        shown === latest
+          ? explainerUrl(this.app.appUrl, slug)
+          : publicationUrl(this.app.appUrl, slug, shown.sequence),
+      sequence: shown.sequence,
+      isLatest: shown === latest,
+      claim: {
+        text: claim.text,
+        summary: claim.summary,
+        topics: claim.topics.map((topic) => topic.topic).sort(),
+      },
+      claimant: claimantForReaders(claim.claimant),
+      appearances,
+      rating: ratings.find((rating) => rating.id === version.ratingId) ?? null,
+      bottomLine: version.bottomLine,
+      bodyHtml: version.bodyHtml,
+      workings,
+      sources,
+      firstPublishedAt: visible[0]!.publishedAt!.toISOString(),
+      publishedAt: shown.publishedAt!.toISOString(),
+      modifiedAt: notes[0]?.at ?? null,
+      updateNotes: notes,
+      retracted: upToShown.some((p) => p.noteKind === 'retraction'),
+      publications: visible.map((p) => ({
+        sequence: p.sequence,
+        publishedAt: p.publishedAt!.toISOString(),
+        url: publicationUrl(this.app.appUrl, slug, p.sequence),
+        noteKind: p.noteKind,
+      })),
+    };
+  }
+
+  /** Published explainers, newest first, optionally only these claims, a topic, a rating. */
+  async list(options: {
+    claimIds?: string[];
+    topic?: string;
+    rating?: string;
+    page?: number;
+  }): Promise<{ items: ReaderExplainerSummary[]; total: number }> {
+    const query = this.dataSource
+      .getRepository(Publication)
+      .createQueryBuilder('p')
+      .innerJoinAndSelect('p.claim', 'claim')
+      .innerJoinAndSelect('claim.claimant', 'claimant')
+      .leftJoinAndSelect('claim.topics', 'topic')
+      .innerJoinAndSelect('p.verdictVersion', 'version')
+      .where("p.state = 'published' AND p.published_at <= NOW(3)")
+      .andWhere(
+        "NOT EXISTS (SELECT 1 FROM publications later WHERE later.claim_id = p.claim_id AND later.state = 'published' AND later.published_at <= NOW(3) AND later.sequence > p.sequence)",
+      );
+    if (options.claimIds) {
+      if (options.claimIds.length === 0) return { items: [], total: 0 };
+      query.andWhere('p.claim_id IN (:...ids)', { ids: options.claimIds });
+    }
+    if (options.topic) {
+      query.andWhere(
+        'EXISTS (SELECT 1 FROM claim_topics t WHERE t.claim_id = p.claim_id AND t.topic = :topic)',
+        { topic: options.topic },
+      );
+    }
+    if (options.rating) query.andWhere('version.rating_id = :rating', { rating: options.rating });
+    const page = options.page ?? 1;
+    const [publications, total] = await query
+      .orderBy('claim.created_at', 'DESC')
+      .skip((page - 1) * READER_PAGE_SIZE)
+      .take(READER_PAGE_SIZE)
+      .getManyAndCount();
+    const claimIds = publications.map((p) => p.claimId);
+    const history = claimIds.length
+      ? await this.dataSource.manager.find(Publication, {
+          where: { claimId: In(claimIds), state: 'published' },
+          order: { sequence: 'ASC' },
+        })
+      : [];
+    const ratings = await this.ratings();
+    const items = publications.map((p) => {
+      const mine = history.filter((h) => h.claimId === p.claimId && h.publishedAt! <= new Date());
+      const noted = mine.filter((h) => h.noteKind);
+      return {
+        slug: p.claim.slug!,
+        url: explainerUrl(this.app.appUrl, p.claim.slug!),
+        summary: p.claim.summary,
+        claimantDisplayName: claimantForReaders(p.claim.claimant).displayName,
+        rating: ratings.find((rating) => rating.id === p.verdictVersion.ratingId) ?? null,
+        bottomLine: p.verdictVersion.bottomLine,
+        topics: p.claim.topics.map((topic) => topic.topic).sort(),
+        firstPublishedAt: (mine[0] ?? p).publishedAt!.toISOString(),
+        modifiedAt: noted[noted.length - 1]?.publishedAt!.toISOString() ?? null,
+        retracted: mine.some((h) => h.noteKind === 'retraction'),
+      };
+    });
+    return { items, total };
+  }
+
+  /** Every published update note across explainers, newest first. */
+  async corrections(): Promise<ReaderCorrection[]> {
+    const publications = await this.dataSource
+      .getRepository(Publication)
+      .createQueryBuilder('p')
+      .innerJoinAndSelect('p.claim', 'claim')
+      .where("p.state = 'published' AND p.published_at <= NOW(3) AND p.note_kind IS NOT NULL")
+      .orderBy('p.published_at', 'DESC')
+      .take(500)
+      .getMany();
+    return publications.map((p) => ({
+      slug: p.claim.slug!,
+      url: explainerUrl(this.app.appUrl, p.claim.slug!),
+      summary: p.claim.summary,
+      note: this.noteOf(p.claim.slug!, p),
+    }));
+  }
+
+  /**
+   * The archived capture of an appearance of a published claim, for readers; null for
+   * anything else (unpublished claims' files stay on the desk).
+   */
+  async publishedCapture(slug: string, attachmentId: string): Promise<Attachment | null> {
+    const claim = await this.dataSource.manager.findOne(Claim, { where: { slug } });
+    if (!claim || claim.status === 'set_aside') return null;
+    const published = await this.dataSource
+      .getRepository(Publication)
+      .createQueryBuilder('p')
+      .where("p.claim_id = :id AND p.state = 'published' AND p.published_at <= NOW(3)", {
+        id: claim.id,
+      })
+      .getExists();
+    const appearance = await this.dataSource.manager.existsBy(Appearance, {
+      claimId: claim.id,
+      captureAttachmentId: attachmentId,
+    });
+    if (!published || !appearance) return null;
+    return this.dataSource.manager.findOne(Attachment, { where: { id: attachmentId } });
+  }
+
+  private notesOf(slug: string, publications: Publication[]): ReaderUpdateNote[] {
+    return publications.filter((p) => p.noteKind).map((p) => this.noteOf(slug, p));
+  }
+
+  private noteOf(slug: string, publication: Publication): ReaderUpdateNote {
+    return {
+      kind: publication.noteKind!,
+      kindLabel: updateNoteKindLabels[publication.noteKind!],
+      text: publication.noteText ?? '',
+      at: publication.publishedAt!.toISOString(),
+      sequence: publication.sequence,
+      url: publicationUrl(this.app.appUrl, slug, publication.sequence),
+    };
+  }
+
+  /** The claim's sources: cited ones first, numbered in order of first citation, then the rest. */
+  private async sources(claimId: string, cited: string[]): Promise<ReaderSource[]> {
+    const links = await this.dataSource.manager.find(ClaimSource, {
+      where: { claimId },
+      relations: { source: true },
+      order: { linkedAt: 'ASC' },
+    });
+    const order = (id: string) => {
+      const index = cited.indexOf(id);
+      return index < 0 ? cited.length : index;
+    };
+    return links
+      .sort((a, b) => order(a.sourceId) - order(b.sourceId))
+      .map(({ source }, index) => ({
+        number: index + 1,
+        id: source.id,
+        title: source.title,
+        authors: source.authors,
+        publisher: source.publisher,
+        year: source.year,
+        doi: source.doi,
+        url: source.url,
+        kind: source.kind,
+        kindLabel: sourceKindLabels[source.kind],
+        grade: source.grade,
+        gradeLabel: reliabilityGradeLabels[source.grade],
+        gradeReason: source.gradeReason,
+      }));
+  }
+
+  private async workings(claimId: string, ids: string[]) {
+    if (ids.length === 0) return [];
+    const workings = await this.dataSource.manager.find(Working, {
+      where: { claimId, id: In(ids) },
+    });
+    const datasetIds = workings.flatMap((w) =>
+      Object.values(w.datasetRefs ?? {}).flatMap((refs) => refs.map((ref) => ref.dataset)),
+    );
+    const datasets = datasetIds.length
+      ? await this.dataSource.manager.find(Dataset, {
+          where: { id: In(datasetIds) },
+          select: { id: true, name: true },
+        })
+      : [];
+    const names = new Map(datasets.map((d) => [d.id, d.name]));
+    return ids
+      .map((id) => workings.find((w) => w.id === id))
+      .filter((w): w is Working => w !== undefined)
+      .map((w) => toReaderWorking(w, names));
+  }
+
+  private async appearances(claimId: string, slug: string) {
+    const appearances = await this.dataSource.manager.find(Appearance, {
+      where: { claimId },
+      order: { seenAt: 'ASC', id: 'ASC' },
+    });
+    return appearances.map((appearance) => ({
+      outlet: appearance.outlet,
+      seenAt: appearance.seenAt.toISOString(),
+      seenTimeZone: appearance.seenTimeZone,
+      isFirstKnown: appearance.isFirstKnown,
+      url: appearance.url,
+      captureUrl: appearance.captureAttachmentId
+        ? `${explainerUrl(this.app.appUrl, slug)}/captures/${appearance.captureAttachmentId}`
+        : null,
+    }));
+  }
+}
