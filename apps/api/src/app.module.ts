@@ -39,6 +39,7 @@ import {
   type DatabaseConfig,
 } from './config/configuration';
 import { validateEnv } from './config/env.schema';
+import { readerRoutePatterns } from './reader/reader-routes';
 import { dataSourceOptions } from './database/data-source-options';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
@@ -49,7 +50,12 @@ function webModules(): DynamicModule[] {
   const env = validateEnv(process.env);
   const rootPath = resolve(env.WEB_DIST_DIR ?? join(__dirname, '../../web/dist'));
   if (!existsSync(join(rootPath, 'index.html'))) return [];
-  return [ServeStaticModule.forRoot({ rootPath, exclude: ['/api/{*splat}'] })];
+  return [
+    ServeStaticModule.forRoot({
+      rootPath,
+      exclude: ['/api/{*splat}', ...readerRoutePatterns.map((pattern) => `/${pattern}`)],
+    }),
+  ];
 }
 
 /**

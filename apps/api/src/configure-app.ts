@@ -4,6 +4,7 @@ import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { createValidationPipe } from './common/pipes/validation.pipe';
+import { readerRoutePatterns } from './reader/reader-routes';
 
 /**
  * Everything main.ts sets on the app besides listening, shared with the e2e tests so
@@ -11,7 +12,7 @@ import { createValidationPipe } from './common/pipes/validation.pipe';
  */
 export function configureApp(app: INestApplication): INestApplication {
   app.useLogger(app.get(Logger));
-  app.setGlobalPrefix('api');
+  app.setGlobalPrefix('api', { exclude: [...readerRoutePatterns] });
   app.use(
     helmet({
       contentSecurityPolicy: {

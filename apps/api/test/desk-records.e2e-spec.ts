@@ -31,13 +31,11 @@ describe('the desk chief’s records: the outbox and the audit trail', () => {
     const [first] = await t.dataSource
       .getRepository(OutboxMessage)
       .find({ order: { createdAt: 'ASC' } });
-    await t.dataSource
-      .getRepository(OutboxMessage)
-      .update(first!.id, {
-        state: 'failed',
-        attempts: 8,
-        lastError: 'Error: 550 mailbox unavailable',
-      });
+    await t.dataSource.getRepository(OutboxMessage).update(first!.id, {
+      state: 'failed',
+      attempts: 8,
+      lastError: 'Error: 550 mailbox unavailable',
+    });
 
     const page = (await t.http().get('/api/outbox').set(as(chief)).expect(200)).body as OutboxPage;
     expect(page.counts).toEqual({ pending: 1, sending: 0, sent: 0, failed: 1 });

@@ -1,10 +1,4 @@
-import {
-  type ClaimDetail,
-  type ClaimStatus,
-  type PublicationView,
-  type SearchResponse,
-  type VerdictVersionView,
-} from '@skyledger/contracts';
+import { type PublicationView, type SearchResponse } from '@skyledger/contracts';
 import { XMLParser } from 'fast-xml-parser';
 import { Claim } from '../src/claims/entities/claim.entity';
 import { OutboxWorker } from '../src/mail/outbox.worker';
@@ -14,158 +8,27 @@ import { explainersAtomFeed } from '../src/reader/atom-feed';
 import { claimReviewJsonLd, shareMeta } from '../src/reader/claim-review';
 import { ReaderService } from '../src/reader/reader.service';
 import { SearchService } from '../src/search/search.service';
-import { createTestApp, testPassword, type TestApp } from './support/test-app';
-
-type Person = 'reporter' | 'editor' | 'copy' | 'chief';
+import { DeskFlow } from './support/desk-flow';
+import { createTestApp, type TestApp } from './support/test-app';
 
 describe('publishing: now or embargoed, corrections in the open, reader subscriptions', () => {
   let t: TestApp;
-  const tokens = {} as Record<Person, string>;
-  const ids = {} as Record<Person, string>;
-  const as = (person: Person) => ({ Authorization: `Bearer ${tokens[person]}` });
+  let desk: DeskFlow;
   const reader = () => t.app.get(ReaderService);
-
-  const detail = async (claimId: string) =>
-    (await t.http().get(`/api/claims/${claimId}`).set(as('copy')).expect(200)).body as ClaimDetail;
-  const move = async (claimId: string, who: Person, to: ClaimStatus, note?: string) => {
-    const response = await t
-      .http()
-      .post(`/api/claims/${claimId}/transitions`)
-      .set(as(who))
-      .send({ to, note, version: (await detail(claimId)).version });
-    expect({
-      to,
-      status: response.status,
-      body: response.status === 200 ? null : response.body,
-    }).toEqual({
-      to,
-      status: 200,
-      body: null,
-    });
-  };
-  const publish = async (claimId: string, who: Person, body: object = {}) =>
-    t
-      .http()
-      .post(`/api/claims/${claimId}/publish`)
-      .set(as(who))
-      .send({ version: (await detail(claimId)).version, ...body });
-
-  /** Drafts (or revises) the verdict and takes it through sign-off to cleared. */
-  async function clearVerdict(claimId: string, fields: object) {
-    const draft = (
-      await t.http().post(`/api/claims/${claimId}/verdict/versions`).set(as('editor')).send({})
-    ).body as VerdictVersionView;
-    await t
-      .http()
-      .patch(`/api/claims/${claimId}/verdict/versions/${draft.id}`)
-      .set(as('editor'))
-      .send({ version: draft.version, ...fields })
-      .expect(200);
-    await move(claimId, 'editor', 'awaiting_signoff');
-    await move(claimId, 'copy', 'cleared');
-  }
-
-  async function clearedClaim(
-    summary: string,
-    claimant = { name: `Claimant of ${summary}`, kind: 'public_figure' },
-  ) {
-    const claim = (
-      await t
-        .http()
-        .post('/api/claims')
-        .set(as('reporter'))
-        .send({
-          text: `${summary}, said on the Marrowby phone-in.`,
-          summary,
-          topics: ['geothermal'],
-          claimant,
-          firstAppearance: {
-            url: 'https://radio.marrowby.test/phone-in/2026-11-20',
-            outlet: 'Radio Marrowby phone-in',
-            seenAt: '2026-11-20T18:30:00+00:00',
-            seenTimeZone: 'Europe/London',
-            isFirstKnown: true,
-          },
-        })
-    ).body as ClaimDetail;
-    await t
-      .http()
-      .post(`/api/claims/${claim.id}/assign`)
-      .set(as('editor'))
-      .send({ assigneeId: ids.editor, version: claim.version })
-      .expect(200);
-    const source = await t
-      .http()
-      .post(`/api/claims/${claim.id}/sources`)
-      .set(as('editor'))
-      .send({
-        source: {
-          title: 'Heat flow from the Earth’s interior: analysis of the global data set',
-          authors: 'Pollack, H. N.; Hurter, S. J.; Johnson, J. R.',
-          publisher: 'Reviews of Geophysics',
-          year: 1993,
-          doi: '10.1029/93RG01249',
-          kind: 'peer_reviewed_paper',
-          grade: 'strong',
-          gradeReason: 'The standard compilation of heat-flow measurements',
-        },
-      })
-      .expect(201);
-    await t
-      .http()
-      .post(`/api/claims/${claim.id}/reply-attempts`)
-      .set(as('editor'))
-      .send({
-        contacted: 'The caller, through the station',
-        contactedAt: '2026-11-21T10:00:00+00:00',
-        channel: 'phone',
-        outcome: 'no_reply',
-      })
-      .expect(201);
-    const working = await t
-      .http()
-      .post(`/api/claims/${claim.id}/workings`)
-      .set(as('editor'))
-      .send({ calculatorId: 'heat-flux-compare', inputs: {} })
-      .expect(201);
-    await clearVerdict(claim.id, {
-      ratingId: 'contradicted',
-      bottomLine:
-        'Heat from the Earth’s interior is about thirty times smaller than the greenhouse forcing.',
-      primarySourceId: source.body.id,
-      body: {
-        type: 'doc',
-        content: [
-          {
-            type: 'paragraph',
-            content: [
-              { type: 'text', text: 'The interior gives off about 47 TW.' },
-              { type: 'sourceCitation', attrs: { sourceId: source.body.id } },
-            ],
-          },
-          { type: 'workingEmbed', attrs: { workingId: working.body.id } },
-        ],
-      },
-    });
-    return detail(claim.id);
-  }
+  const detail = (claimId: string) => desk.detail(claimId);
+  const move = (...args: Parameters<DeskFlow['move']>) => desk.move(...args);
+  const publish = (...args: Parameters<DeskFlow['publish']>) => desk.publish(...args);
+  const clearVerdict = (...args: Parameters<DeskFlow['clearVerdict']>) =>
+    desk.clearVerdict(...args);
+  const clearedClaim = (...args: Parameters<DeskFlow['clearedClaim']>) =>
+    desk.clearedClaim(...args);
 
   beforeAll(async () => {
     t = await createTestApp('publishing', {
       PUBLISHER_ENABLED: 'false',
       OUTBOX_WORKER_ENABLED: 'false',
     });
-    const roles = {
-      reporter: 'reporter',
-      editor: 'science_editor',
-      copy: 'copy_desk',
-      chief: 'desk_chief',
-    } as const;
-    for (const [person, role] of Object.entries(roles) as Array<[Person, (typeof roles)[Person]]>) {
-      const user = await t.addUser(role, `${person}@publishing.test`);
-      ids[person] = user.id;
-      tokens[person] = (await t.signIn(user.email, testPassword)).accessToken;
-    }
+    desk = await DeskFlow.start(t, 'publishing.test');
   });
   afterAll(() => t.close());
 

@@ -15,5 +15,8 @@ export function appEnv(options: {
     JWT_SECRET: localSecrets().jwtSecret,
     SMTP_HOST: '127.0.0.1',
     SMTP_PORT: String(options.smtpPort),
+    // The demo newsroom (seeds-demo) works in London.
+    NEWSROOM_NAME: 'Marrowby Gazette',
+    DESK_TIME_ZONE: 'Europe/London',
   };
 }

@@ -3,6 +3,7 @@ import { captures } from './captures';
 import { claimants } from './claimants';
 import { desk } from './desk';
 import { sources } from './sources';
+import { demoVerdicts } from './verdicts';
 import { demoWorkings } from './workings';
 
 const london = 'Europe/London';
@@ -25,9 +26,10 @@ const atmosphericPhysicist = {
 };
 
 /**
- * The demo claims, in the states the claim life has so far: filed, in research (with
- * the science editor Tamsin Ferrow) and set aside. Sign-off and publishing come with the
- * verdicts. Everything said, replied and quoted here is invented.
+ * The demo claims, in every state of the claim life: filed, in research (with the science
+ * editor Tamsin Ferrow), awaiting sign-off, sent back, cleared and scheduled, published
+ * (one corrected, one retracted) and set aside. Everything said, replied and quoted here
+ * is invented.
  */
 export const demoClaims: SeedClaim[] = [
   {
@@ -55,6 +57,7 @@ export const demoClaims: SeedClaim[] = [
     workings: demoWorkings.core,
     sources: [
       { source: sources.heatFlux, by: desk.editor },
+      { source: sources.heatFlowDataSet, by: desk.editor },
       { source: sources.ar6EnergyBudget, by: desk.editor },
       { source: sources.ar6, by: desk.editor },
       { source: sources.geophysicistInterview, by: desk.editor },
@@ -92,6 +95,7 @@ export const demoClaims: SeedClaim[] = [
         by: desk.reporter,
       },
     ],
+    verdict: demoVerdicts.core,
   },
   {
     summary: 'The sun has grown brighter, and that explains recent warming',
@@ -132,6 +136,7 @@ export const demoClaims: SeedClaim[] = [
         by: desk.editor,
       },
     ],
+    verdict: demoVerdicts.sun,
   },
   {
     summary: 'Global warming stopped in 2016',
@@ -178,6 +183,7 @@ export const demoClaims: SeedClaim[] = [
         by: desk.editor,
       },
     ],
+    verdict: demoVerdicts.pause,
   },
   {
     summary: 'CO2 is too small a share of the air to change the climate',
@@ -231,6 +237,7 @@ export const demoClaims: SeedClaim[] = [
         by: desk.chief,
       },
     ],
+    verdict: demoVerdicts.co2,
   },
   {
     summary: 'Volcanoes emit more CO2 than all human activity',
@@ -280,7 +287,22 @@ export const demoClaims: SeedClaim[] = [
         seenTimeZone: london,
       },
     ],
-    sources: [{ source: sources.cloudPreprint, by: desk.reporter }],
+    sources: [
+      { source: sources.cloudPreprint, by: desk.reporter },
+      { source: sources.solarInfluences, by: desk.editor },
+    ],
+    assignee: { email: desk.editor, by: desk.chief },
+    replyAttempts: [
+      {
+        contacted: 'Rufus Kettleby, by the podcast’s contact form',
+        contactedAt: '2026-11-29T16:00:00+00:00',
+        channel: 'social_message',
+        deadline: '2026-12-04T17:00:00+00:00',
+        outcome: 'awaiting',
+        by: desk.editor,
+      },
+    ],
+    verdict: demoVerdicts.cosmicRays,
   },
   {
     summary: 'The oceans are warming from undersea volcanoes, not the air',
@@ -310,6 +332,17 @@ export const demoClaims: SeedClaim[] = [
         by: desk.editor,
       },
     ],
+    replyAttempts: [
+      {
+        contacted: 'Councillor Threlkeld’s office',
+        contactedAt: '2026-11-24T10:30:00+00:00',
+        channel: 'phone',
+        outcome: 'declined',
+        reply: 'The councillor’s office said he stands by his words and will not comment further.',
+        by: desk.editor,
+      },
+    ],
+    verdict: demoVerdicts.oceans,
   },
   {
     summary: 'Marrowby’s station readings were nudged up to fake local warming',

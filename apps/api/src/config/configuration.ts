@@ -16,6 +16,8 @@ export const appConfig = registerAs('app', () => {
     appUrl: env.APP_URL.replace(/\/$/, ''),
     logLevel: env.LOG_LEVEL,
     webDistDir: env.WEB_DIST_DIR,
+    newsroomName: env.NEWSROOM_NAME,
+    deskTimeZone: env.DESK_TIME_ZONE,
   };
 });
 

@@ -1,3 +1,4 @@
+import { isTimeZone } from '@skyledger/contracts';
 import { z } from 'zod';
 
 const bool = z
@@ -27,6 +28,11 @@ export const envSchema = databaseEnvSchema
       .enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'])
       .default('info'),
     WEB_DIST_DIR: z.string().optional(),
+    NEWSROOM_NAME: z.string().trim().min(1).max(120).default('Skyledger newsroom'),
+    DESK_TIME_ZONE: z
+      .string()
+      .refine(isTimeZone, { error: 'must be an IANA time zone, e.g. Europe/London' })
+      .default('UTC'),
 
     JWT_SECRET: z.string().min(32, { error: 'must be at least 32 characters' }),
     JWT_ACCESS_TTL_SECONDS: int(30, 86_400).default(900),

@@ -245,6 +245,7 @@ export class PublishingService {
     claim.slug ??= await uniqueSlug(manager, claim);
     publication.state = 'published';
     publication.publishedAt = new Date();
+    claim.firstPublishedAt ??= publication.publishedAt;
     await manager.save(publication);
     await manager.update(
       VerdictVersion,

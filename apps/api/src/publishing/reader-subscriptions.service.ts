@@ -11,9 +11,6 @@ import { readerConfirmMail, readerUpdateMail } from '../mail/templates/publishin
 import { ReaderSubscription } from './entities/reader-subscription.entity';
 import { explainerUrl } from './publication-view';
 
-/** The name reader mails are signed with. */
-export const READER_SITE_NAME = 'Skyledger explainers';
-
 /**
  * Readers asking for mail when an explainer is updated: double opt-in (nothing is sent
  * but the confirmation until its link is opened), a one-click unsubscribe link in every
@@ -59,7 +56,7 @@ export class ReaderSubscriptionsService {
         ...readerConfirmMail({
           summary: claim.summary,
           confirmUrl: `${base}/subscription/confirm?token=${encodeURIComponent(token)}`,
-          siteName: READER_SITE_NAME,
+          siteName: this.app.newsroomName,
         }),
       });
     });
@@ -103,7 +100,7 @@ export class ReaderSubscriptionsService {
           summary: claim.summary,
           ...note,
           unsubscribeUrl: `${note.url}/subscription/unsubscribe?token=${this.unsubscribeToken(subscriber.id)}`,
-          siteName: READER_SITE_NAME,
+          siteName: this.app.newsroomName,
         }),
       });
     }

@@ -22,7 +22,6 @@ import { appConfig, type AppConfig } from '../config/configuration';
 import { Dataset } from '../datasets/entities/dataset.entity';
 import { Publication } from '../publishing/entities/publication.entity';
 import { explainerUrl, publicationUrl } from '../publishing/publication-view';
-import { READER_SITE_NAME } from '../publishing/reader-subscriptions.service';
 import { RatingLevel } from '../ratings/entities/rating-level.entity';
 import { ClaimSource } from '../sources/entities/claim-source.entity';
 import { Working } from '../workings/entities/working.entity';
@@ -53,7 +52,12 @@ export class ReaderService {
   ) {}
 
   site(): ReaderSite {
-    return { name: READER_SITE_NAME, origin: this.app.appUrl, organisation: 'Skyledger newsroom' };
+    return {
+      name: this.app.newsroomName,
+      origin: this.app.appUrl,
+      organisation: this.app.newsroomName,
+      timeZone: this.app.deskTimeZone,
+    };
   }
 
   async ratings(): Promise<ReaderRating[]> {
@@ -136,12 +140,16 @@ export class ReaderService {
     };
   }
 
-  /** Published explainers, newest first, optionally only these claims, a topic, a rating. */
+  /**
+   * Published explainers, newest first (or in the order of `claimIds` when given, as
+   * search ranked them), optionally of a topic or a rating.
+   */
   async list(options: {
     claimIds?: string[];
     topic?: string;
     rating?: string;
     page?: number;
+    pageSize?: number;
   }): Promise<{ items: ReaderExplainerSummary[]; total: number }> {
     const query = this.dataSource
       .getRepository(Publication)
@@ -165,12 +173,18 @@ export class ReaderService {
       );
     }
     if (options.rating) query.andWhere('version.rating_id = :rating', { rating: options.rating });
-    const page = options.page ?? 1;
-    const [publications, total] = await query
-      .orderBy('claim.created_at', 'DESC')
-      .skip((page - 1) * READER_PAGE_SIZE)
-      .take(READER_PAGE_SIZE)
+    const page = options.claimIds ? 1 : (options.page ?? 1);
+    const pageSize = options.pageSize ?? READER_PAGE_SIZE;
+    const [found, total] = await query
+      .orderBy('claim.first_published_at', 'DESC')
+      .addOrderBy('claim.id', 'ASC')
+      .skip((page - 1) * pageSize)
+      .take(pageSize)
       .getManyAndCount();
+    const rank = (claimId: string) => options.claimIds?.indexOf(claimId) ?? 0;
+    const publications = options.claimIds
+      ? found.sort((a, b) => rank(a.claimId) - rank(b.claimId))
+      : found;
     const claimIds = publications.map((p) => p.claimId);
     const history = claimIds.length
       ? await this.dataSource.manager.find(Publication, {
@@ -198,6 +212,17 @@ export class ReaderService {
     return { items, total };
   }
 
+  /** The topics of published explainers, for the index's filter. */
+  async topics(): Promise<string[]> {
+    const rows = await this.dataSource.query<Array<{ topic: string }>>(
+      `SELECT DISTINCT t.topic FROM claim_topics t
+         JOIN publications p ON p.claim_id = t.claim_id
+        WHERE p.state = 'published' AND p.published_at <= NOW(3)
+        ORDER BY t.topic`,
+    );
+    return rows.map((row) => row.topic);
+  }
+
   /** Every published update note across explainers, newest first. */
   async corrections(): Promise<ReaderCorrection[]> {
     const publications = await this.dataSource
@@ -205,7 +230,8 @@ export class ReaderService {
       .createQueryBuilder('p')
       .innerJoinAndSelect('p.claim', 'claim')
       .where("p.state = 'published' AND p.published_at <= NOW(3) AND p.note_kind IS NOT NULL")
-      .orderBy('p.published_at', 'DESC')
+      .orderBy('claim.first_published_at', 'DESC')
+      .addOrderBy('claim.id', 'ASC')
       .take(500)
       .getMany();
     return publications.map((p) => ({

@@ -34,6 +34,7 @@ import { SourcesService } from '../sources/sources.service';
 import { workingKind } from '../workings/working-kind';
 import { Dataset } from '../datasets/entities/dataset.entity';
 import { seedActor } from './seed-actor';
+import { runVerdictSteps, type SeedVerdictStep } from './verdict-steps';
 
 /** A file the seed uploads as it is: its name and its bytes. */
 export interface SeedFile {
@@ -73,6 +74,8 @@ export interface SeedClaim {
    * name, `{ dataset: '<name>', column }`: the seeder puts in its id.
    */
   workings?: Array<{ calculatorId: string; inputs: Record<string, unknown>; note?: string } & By>;
+  /** The verdict's life after research: drafts, sign-off decisions, publications. */
+  verdict?: SeedVerdictStep[];
   setAside?: { reason: SetAsideReason; note?: string } & By;
 }
 
@@ -173,6 +176,7 @@ export class ClaimSeeder {
         createCommentSchema.parse(comment),
       );
     }
+    if (spec.verdict) await runVerdictSteps(this.context, id, spec.verdict);
     if (spec.setAside) {
       const { by, reason, note } = spec.setAside;
       await this.context

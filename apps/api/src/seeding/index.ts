@@ -12,6 +12,7 @@ import { SeedingModule } from './seeding.module';
 
 export type { SeedClaim, SeedFile } from './claim-seeder';
 export type { SeedDataset } from './dataset-seeder';
+export type { SeedVerdict, SeedVerdictStep } from './verdict-steps';
 
 /**
  * A bare connection to the API's database (the DB_* variables, or apps/api/.env), no
@@ -42,6 +43,8 @@ export class SeedingContext {
   static async open(): Promise<SeedingContext> {
     loadEnvFile();
     process.env.OUTBOX_WORKER_ENABLED = 'false';
+    // The API's own scheduler publishes anything the seed schedules.
+    process.env.PUBLISHER_ENABLED = 'false';
     process.env.LOG_LEVEL ??= 'warn';
     return new SeedingContext(
       await NestFactory.createApplicationContext(SeedingModule.forRoot(), {

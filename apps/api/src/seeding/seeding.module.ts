@@ -5,6 +5,8 @@ import { ClaimantsModule } from '../claimants/claimants.module';
 import { ClaimLifeModule } from '../claim-life/claim-life.module';
 import { ClaimsModule } from '../claims/claims.module';
 import { DatasetsModule } from '../datasets/datasets.module';
+import { PublishingModule } from '../publishing/publishing.module';
+import { VerdictsModule } from '../verdicts/verdicts.module';
 import { SourcesModule } from '../sources/sources.module';
 import { UsersModule } from '../users/users.module';
 
@@ -23,6 +25,8 @@ export class SeedingModule {
         SourcesModule,
         AttachmentsModule,
         DatasetsModule,
+        VerdictsModule,
+        PublishingModule,
       ],
     };
   }

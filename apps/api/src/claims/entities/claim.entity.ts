@@ -42,6 +42,10 @@ export class Claim {
   @Column({ type: 'varchar', length: 100, nullable: true })
   slug: string | null;
 
+  /** When its explainer was first published: the order of the reader index. */
+  @Column(instantColumn({ name: 'first_published_at', nullable: true }))
+  firstPublishedAt: Date | null;
+
   /** The claim as said, word for word. */
   @Column({ type: 'text' })
   text: string;

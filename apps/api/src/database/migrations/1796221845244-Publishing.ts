@@ -48,6 +48,10 @@ export class Publishing1796221845244 implements MigrationInterface {
             ADD \`slug\` varchar(100) NULL
         `);
     await queryRunner.query(`
+            ALTER TABLE \`claims\`
+            ADD \`first_published_at\` datetime(3) NULL
+        `);
+    await queryRunner.query(`
             CREATE UNIQUE INDEX \`UQ_claims_slug\` ON \`claims\` (\`slug\`)
         `);
     await queryRunner.query(`
@@ -86,6 +90,9 @@ export class Publishing1796221845244 implements MigrationInterface {
         `);
     await queryRunner.query(`
             ALTER TABLE \`claims\` DROP COLUMN \`slug\`
+        `);
+    await queryRunner.query(`
+            ALTER TABLE \`claims\` DROP COLUMN \`first_published_at\`
         `);
     await queryRunner.query(`
             DROP INDEX \`UQ_reader_subscriptions_claim_email\` ON \`reader_subscriptions\`
