@@ -93,6 +93,7 @@ const commands = {
   'db:stop': [],
   'db:status': [],
   'db:reset': [systemNeeds.mariadb],
+  'demo:reset': [systemNeeds.mariadb],
 };
 if (!(command in commands))
   fail(`Unknown command "${command}". Known: ${Object.keys(commands).join(', ')}.`);

@@ -1,4 +1,7 @@
+import { rmSync } from 'node:fs';
+import { join } from 'node:path';
 import * as mariadb from './mariadb.js';
+import { dataDir } from './paths.js';
 import { StepFailedError } from './processes.js';
 import { startStack } from './start.js';
 import { runAllTests } from './test-run.js';
@@ -30,6 +33,16 @@ const commands: Record<string, () => Promise<number>> = {
         : `Not running (datadir ${state.datadir})`,
     );
     return state.running ? 0 : 3;
+  },
+  'demo:reset': async () => {
+    await mariadb.resetAppDatabase();
+    for (const folder of ['files', 'maildev']) {
+      rmSync(join(dataDir, folder), { recursive: true, force: true });
+    }
+    console.info(
+      'The demo desk is empty again (database, stored files and caught mail); `npm start` migrates and seeds it afresh.',
+    );
+    return 0;
   },
   'db:reset': async () => {
     await mariadb.reset();

@@ -209,3 +209,12 @@ export async function reset(): Promise<void> {
   rmSync(files.data, { recursive: true, force: true });
   await start();
 }
+
+/** Empties the app's own database (the demo), leaving test and benchmark databases alone. */
+export async function resetAppDatabase(): Promise<void> {
+  await start();
+  runSql(`
+    DROP DATABASE IF EXISTS \`${database.name}\`;
+    CREATE DATABASE \`${database.name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;
+  `);
+}

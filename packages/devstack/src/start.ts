@@ -69,6 +69,7 @@ ${line}
  Skyledger is running.
 
    Desk (sign in)   http://127.0.0.1:${ports.app}
+   Reader pages     http://127.0.0.1:${ports.app}/explainers   (what the public sees, no sign-in)
    API docs         http://127.0.0.1:${ports.app}/api/docs
    Mail inbox       http://127.0.0.1:${ports.mailInbox}   (every mail the desk sends lands here)
    Database         MariaDB on 127.0.0.1:${mariadb.database.port} (data in ${join(repoRoot, '.data')})

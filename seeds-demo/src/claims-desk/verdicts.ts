@@ -36,6 +36,9 @@ export const demoVerdicts = {
     { by: desk.editor, submit: true },
     { by: desk.copy, clear: true },
     { by: desk.copy, publish: {} },
+    // Two readers ask to hear of updates (addresses on the reserved example domain).
+    { readerSubscribes: 'reader.one@mail.example' },
+    { readerSubscribes: 'reader.two@mail.example' },
     { by: desk.editor, reopen: true },
     {
       by: desk.editor,

@@ -4,6 +4,9 @@ import { type ExplainerDocument } from '@skyledger/explainer';
 import { DataSource } from 'typeorm';
 import { ClaimLifeService } from '../claim-life/claim-life.service';
 import { ClaimsService } from '../claims/claims.service';
+import { Claim } from '../claims/entities/claim.entity';
+import { ReaderSubscription } from '../publishing/entities/reader-subscription.entity';
+import { ReaderSubscriptionsService } from '../publishing/reader-subscriptions.service';
 import { PublishingService } from '../publishing/publishing.service';
 import { ClaimSource } from '../sources/entities/claim-source.entity';
 import { VerdictVersion } from '../verdicts/entities/verdict-version.entity';
@@ -25,22 +28,27 @@ export interface SeedVerdict {
   explainer?: string[];
 }
 
-/** One thing done to the verdict after research, in order, by the person named. */
-export type SeedVerdictStep = { by: string } & (
-  | { draft: SeedVerdict }
-  | { submit: true }
-  | { sendBack: string }
-  | { clear: true }
-  | { clearLegalFlag: true }
-  | {
-      publish: {
-        inDays?: number;
-        timeZone?: string;
-        note?: { kind: UpdateNoteKind; text: string };
-      };
-    }
-  | { reopen: true }
-);
+/**
+ * One thing done to the verdict after research, in order, by the person named; or a
+ * reader subscribing to the published explainer's updates (confirmed, as if from the mail).
+ */
+export type SeedVerdictStep =
+  | { readerSubscribes: string }
+  | ({ by: string } & (
+      | { draft: SeedVerdict }
+      | { submit: true }
+      | { sendBack: string }
+      | { clear: true }
+      | { clearLegalFlag: true }
+      | {
+          publish: {
+            inDays?: number;
+            timeZone?: string;
+            note?: { kind: UpdateNoteKind; text: string };
+          };
+        }
+      | { reopen: true }
+    ));
 
 const marker = /\[\[(source|working):([^\]]+)\]\]/g;
 
@@ -96,6 +104,18 @@ async function explainerDocument(
   return { type: 'doc', content } as ExplainerDocument;
 }
 
+/** A confirmed reader subscription, as if the reader had opened the link in the mail. */
+async function subscribeReader(context: INestApplicationContext, claimId: string, email: string) {
+  const manager = context.get(DataSource).manager;
+  const claim = await manager.findOneByOrFail(Claim, { id: claimId });
+  await context.get(ReaderSubscriptionsService, { strict: false }).subscribe(claim, email);
+  await manager.update(
+    ReaderSubscription,
+    { claimId, email: email.toLowerCase() },
+    { confirmedAt: new Date() },
+  );
+}
+
 /** Does each step through the API's own services, so every rule of sign-off applies. */
 export async function runVerdictSteps(
   context: INestApplicationContext,
@@ -106,6 +126,10 @@ export async function runVerdictSteps(
   const life = context.get(ClaimLifeService, { strict: false });
   const version = async () => (await claims.findOrFail(claimId)).version;
   for (const step of steps) {
+    if ('readerSubscribes' in step) {
+      await subscribeReader(context, claimId, step.readerSubscribes);
+      continue;
+    }
     const actor = await seedActor(context, step.by);
     if ('draft' in step) {
       const verdicts = context.get(VerdictsService, { strict: false });
