@@ -94,6 +94,8 @@ const commands = {
   'db:status': [],
   'db:reset': [systemNeeds.mariadb],
   'demo:reset': [systemNeeds.mariadb],
+  'db:backup': [systemNeeds.mariadb],
+  'db:restore': [systemNeeds.mariadb],
 };
 if (!(command in commands))
   fail(`Unknown command "${command}". Known: ${Object.keys(commands).join(', ')}.`);

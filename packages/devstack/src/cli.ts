@@ -1,5 +1,6 @@
 import { rmSync } from 'node:fs';
 import { join } from 'node:path';
+import { backupCommand, restoreCommand } from './backup-commands.js';
 import * as mariadb from './mariadb.js';
 import { dataDir } from './paths.js';
 import { StepFailedError } from './processes.js';
@@ -34,6 +35,8 @@ const commands: Record<string, () => Promise<number>> = {
     );
     return state.running ? 0 : 3;
   },
+  'db:backup': () => backupCommand(process.argv.slice(3)),
+  'db:restore': () => restoreCommand(process.argv.slice(3)),
   'demo:reset': async () => {
     await mariadb.resetAppDatabase();
     for (const folder of ['files', 'maildev']) {

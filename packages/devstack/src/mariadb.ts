@@ -5,6 +5,7 @@ import { join } from 'node:path';
 import { dataDir } from './paths.js';
 import { isPortOpen, StepFailedError, waitFor } from './processes.js';
 import { localSecrets } from './secrets.js';
+import { type DatabaseAccess } from './test-database.js';
 
 /**
  * The project's own MariaDB: its own datadir, socket and port, bound to 127.0.0.1, never
@@ -34,7 +35,9 @@ const isRoot = process.getuid?.() === 0;
 const adminUser = isRoot ? 'root' : userInfo().username;
 
 /** The environment the API and the tools need to reach the app database. */
-export function databaseEnv(name = database.name): Record<string, string> {
+export function databaseEnv(
+  name = database.name,
+): DatabaseAccess & { DB_NAME: string } & Record<string, string> {
   return {
     DB_HOST: database.host,
     DB_PORT: String(database.port),
