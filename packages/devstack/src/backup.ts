@@ -4,6 +4,7 @@ import { createReadStream, createWriteStream, existsSync } from 'node:fs';
 import { cp, mkdir, mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { dirname, join, relative } from 'node:path';
 import { pipeline } from 'node:stream/promises';
+import { type RowDataPacket } from 'mysql2';
 import { createConnection } from 'mysql2/promise';
 import { tmpDir } from './paths.js';
 import { StepFailedError } from './processes.js';
@@ -57,20 +58,18 @@ export async function tableFingerprints(
     database,
   });
   try {
-    const [tables] = await connection.query<
-      Array<{ name: string } & import('mysql2').RowDataPacket>
-    >(
+    const [tables] = await connection.query<Array<{ name: string } & RowDataPacket>>(
       "SELECT table_name AS name FROM information_schema.tables WHERE table_schema = ? AND table_type = 'BASE TABLE' ORDER BY table_name",
       [database],
     );
     const result: BackupManifest['tables'] = {};
     for (const { name } of tables) {
-      const [[count]] = await connection.query<
-        Array<{ rows: number } & import('mysql2').RowDataPacket>
-      >(`SELECT COUNT(*) AS \`rows\` FROM \`${name}\``);
-      const [[checksum]] = await connection.query<
-        Array<{ Checksum: string } & import('mysql2').RowDataPacket>
-      >(`CHECKSUM TABLE \`${name}\``);
+      const [[count]] = await connection.query<Array<{ rows: number } & RowDataPacket>>(
+        `SELECT COUNT(*) AS \`rows\` FROM \`${name}\``,
+      );
+      const [[checksum]] = await connection.query<Array<{ Checksum: string } & RowDataPacket>>(
+        `CHECKSUM TABLE \`${name}\``,
+      );
       result[name] = { rows: Number(count!.rows), checksum: String(checksum!.Checksum) };
     }
     return result;
