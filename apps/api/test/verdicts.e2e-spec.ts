@@ -151,8 +151,9 @@ describe('verdicts, the claim life and sign-off', () => {
   afterAll(() => t.close());
 
   describe('the rating scale', () => {
-    it('ships the default scale, readable by anyone', async () => {
-      const response = await t.http().get('/api/rating-levels');
+    it('ships the default scale, readable by the whole desk', async () => {
+      expect((await t.http().get('/api/rating-levels')).status).toBe(401);
+      const response = await t.http().get('/api/rating-levels').set(as('reporter'));
       expect(response.status).toBe(200);
       const levels = response.body as RatingLevelView[];
       expect(levels.map((level) => [level.id, level.number, level.label, level.isRating])).toEqual([
@@ -208,7 +209,8 @@ describe('verdicts, the claim life and sign-off', () => {
       const refused = await t.http().delete('/api/rating-levels/contradicted').set(as('chief'));
       expect(refused.status).toBe(409);
       expect(refused.body.fields).toEqual({ id: 'inUse' });
-      const levels = (await t.http().get('/api/rating-levels')).body as RatingLevelView[];
+      const levels = (await t.http().get('/api/rating-levels').set(as('copy')))
+        .body as RatingLevelView[];
       expect(levels.find((level) => level.id === 'contradicted')).toMatchObject({ inUse: true });
     });
   });

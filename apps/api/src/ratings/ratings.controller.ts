@@ -13,19 +13,18 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { type RatingLevelView } from '@skyledger/contracts';
 import { type AuthenticatedUser } from '../auth/authenticated-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import { Public } from '../common/decorators/public.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { CreateRatingLevelDto } from './dto/create-rating-level.dto';
 import { UpdateRatingLevelDto } from './dto/update-rating-level.dto';
 import { RatingsService } from './ratings.service';
 
-/** The rating scale: open to read (readers see it on the methodology page), a desk chief's to edit. */
+/** The rating scale: the desk reads it (readers see it on the methodology page), a desk chief edits it. */
 @ApiTags('rating scale')
 @Controller('rating-levels')
 export class RatingsController {
   constructor(private readonly ratings: RatingsService) {}
 
-  @Public()
+  @ApiBearerAuth()
   @Get()
   list(): Promise<RatingLevelView[]> {
     return this.ratings.list();
