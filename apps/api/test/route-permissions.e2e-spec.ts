@@ -143,7 +143,6 @@ describe('every route against every role', () => {
         let request = t.http()[method.toLowerCase() as 'get'](path);
         if (caller !== 'anonymous')
           request = request.set('Authorization', `Bearer ${tokens[caller]}`);
-        if (process.env.ROUTE_DEBUG) console.log(route, caller);
         let status: number;
         try {
           status = (method === 'GET' ? await request : await request.send({})).status;
