@@ -1,9 +1,7 @@
 import { type CreateClaimRequest } from '@skyledger/contracts';
-import { Type } from 'class-transformer';
-import { IsOptional, ValidateNested } from 'class-validator';
 import { CreateAppearanceDto } from '../../appearances/dto/create-appearance.dto';
 import { CreateClaimantDto } from '../../claimants/dto/create-claimant.dto';
-import { UuidField } from '../../common/validation/fields';
+import { NestedField, UuidField } from '../../common/validation/fields';
 import { ClaimFieldsDto } from './claim-fields.dto';
 
 /** File a claim: an existing claimant by id, or a new one, and optionally where it was seen. */
@@ -11,13 +9,9 @@ export class CreateClaimDto extends ClaimFieldsDto implements CreateClaimRequest
   @UuidField({ optional: true })
   claimantId?: string;
 
-  @IsOptional()
-  @ValidateNested()
-  @Type(() => CreateClaimantDto)
+  @NestedField(() => CreateClaimantDto, { optional: true })
   claimant?: CreateClaimantDto;
 
-  @IsOptional()
-  @ValidateNested()
-  @Type(() => CreateAppearanceDto)
+  @NestedField(() => CreateAppearanceDto, { optional: true })
   firstAppearance?: CreateAppearanceDto;
 }

@@ -1,4 +1,5 @@
-import { applyDecorators } from '@nestjs/common';
+import { applyDecorators, type Type } from '@nestjs/common';
+import { Type as TransformType } from 'class-transformer';
 import { isTimeZone } from '@skyledger/contracts';
 import {
   IsBoolean,
@@ -6,6 +7,7 @@ import {
   IsIn,
   IsInt,
   IsISO8601,
+  IsObject,
   IsNotEmpty,
   IsOptional,
   IsString,
@@ -16,6 +18,7 @@ import {
   MaxLength,
   Min,
   ValidateBy,
+  ValidateNested,
 } from 'class-validator';
 import { Trim } from '../transforms';
 
@@ -91,3 +94,15 @@ export const IntField = (min: number, max: number, { optional = false } = {}) =>
 /** The version the editor last saw; a stale one gets 409. */
 export const VersionField = () =>
   applyDecorators(IsInt({ message: 'version must be a whole number' }), Min(1));
+
+/**
+ * A nested object checked against its own DTO. An array or any other non-object is
+ * refused outright: `ValidateNested` alone would let an empty array through.
+ */
+export const NestedField = (type: () => Type<unknown>, { optional = false } = {}) =>
+  maybe(
+    optional,
+    IsObject({ message: '$property must be an object' }),
+    ValidateNested(),
+    TransformType(type),
+  );

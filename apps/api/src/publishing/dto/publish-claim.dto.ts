@@ -1,12 +1,11 @@
-import { Type } from 'class-transformer';
 import {
   updateNoteKinds,
   type PublishClaimRequest,
   type UpdateNoteKind,
 } from '@skyledger/contracts';
-import { IsOptional, ValidateNested } from 'class-validator';
 import {
   EnumField,
+  NestedField,
   InstantField,
   TextField,
   TimeZoneField,
@@ -30,9 +29,7 @@ export class PublishClaimDto implements PublishClaimRequest {
   @TimeZoneField({ optional: true })
   timeZone?: string;
 
-  @IsOptional()
-  @ValidateNested()
-  @Type(() => UpdateNoteDto)
+  @NestedField(() => UpdateNoteDto, { optional: true })
   note?: UpdateNoteDto;
 
   @VersionField()

@@ -1,6 +1,4 @@
-import { Type } from 'class-transformer';
-import { IsOptional, ValidateNested } from 'class-validator';
-import { UuidField } from '../../common/validation/fields';
+import { NestedField, UuidField } from '../../common/validation/fields';
 import { CreateSourceDto } from './create-source.dto';
 
 /** Cite a source for a claim: an existing one by id, or a new one (one of the two). */
@@ -8,8 +6,6 @@ export class LinkSourceDto {
   @UuidField({ optional: true })
   sourceId?: string;
 
-  @IsOptional()
-  @ValidateNested()
-  @Type(() => CreateSourceDto)
+  @NestedField(() => CreateSourceDto, { optional: true })
   source?: CreateSourceDto;
 }
