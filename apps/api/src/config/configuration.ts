@@ -39,7 +39,7 @@ export const authConfig = registerAs('auth', () => {
     accessTtlSeconds: env.JWT_ACCESS_TTL_SECONDS,
     refreshTtlDays: env.REFRESH_TTL_DAYS,
     refreshReuseGraceSeconds: env.REFRESH_REUSE_GRACE_SECONDS,
-    cookieSecure: env.COOKIE_SECURE,
+    cookieSecure: env.COOKIE_SECURE ?? env.NODE_ENV === 'production',
     rateLimitPerMinute: env.AUTH_RATE_LIMIT_PER_MINUTE,
     lockoutThreshold: env.LOCKOUT_THRESHOLD,
     lockoutMinutes: env.LOCKOUT_MINUTES,

@@ -38,7 +38,8 @@ export const envSchema = databaseEnvSchema
     JWT_ACCESS_TTL_SECONDS: int(30, 86_400).default(900),
     REFRESH_TTL_DAYS: int(1, 365).default(14),
     REFRESH_REUSE_GRACE_SECONDS: int(0, 300).default(10),
-    COOKIE_SECURE: bool.default(false),
+    /** Defaults to true in production (see configuration.ts): cookies then need HTTPS. */
+    COOKIE_SECURE: bool.optional(),
     AUTH_RATE_LIMIT_PER_MINUTE: int(1, 100_000).default(10),
     LOCKOUT_THRESHOLD: int(1, 100).default(5),
     LOCKOUT_MINUTES: int(1, 1440).default(15),
