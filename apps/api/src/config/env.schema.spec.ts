@@ -9,9 +9,11 @@ describe('validateEnv', () => {
       PORT: 3000,
       DB_PORT: 3307,
       HOST: '127.0.0.1',
-      COOKIE_SECURE: false,
       INVITE_TTL_HOURS: 72,
+      DESK_TIME_ZONE: 'UTC',
     });
+    // Left unset, it follows NODE_ENV (configuration.ts): Secure in production only.
+    expect(env.COOKIE_SECURE).toBeUndefined();
   });
 
   it('lists everything missing or wrong at once, by name', () => {
