@@ -25,5 +25,7 @@ export default defineConfig({
     include: ['src/**/*.test.{ts,tsx}', 'test/**/*.test.{ts,tsx}'],
     unstubGlobals: true,
     restoreMocks: true,
+    // Above the DOM queries' 10 s wait, so a slow first render fails on its own words.
+    testTimeout: 30_000,
   },
 });

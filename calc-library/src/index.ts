@@ -16,6 +16,9 @@ export { renderReferencesMarkdown } from './references/render-references-markdow
 export { type StartYearRow } from './calculators/trend.js';
 export { type PairDifferenceRow, type SeriesTrendRow } from './calculators/pattern-compare.js';
 export { type WorksheetLineResult } from './worksheet/evaluate-worksheet.js';
+export { convertQuantity, type ConversionTarget } from './units/convert-quantity.js';
+export { displayUnit } from './units/display-unit.js';
+export { formatNumber, formatQuantity } from './format/format-number.js';
 export type {
   AcceptedInputs,
   Band,

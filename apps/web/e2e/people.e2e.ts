@@ -79,7 +79,16 @@ describe('people and invitations', () => {
         'oskar.venn@marrowby-gazette.test',
         'a good long passphrase',
       );
-      expect(await navLinks(invitee)).toEqual(['Desk', 'Account']);
+      expect(await navLinks(invitee)).toEqual([
+        'Desk',
+        'Claims',
+        'File a claim',
+        'Search',
+        'Datasets',
+        'Workbench',
+        'Rating scale',
+        'Account',
+      ]);
       await invitee.getByText('Oskar Venn').first().waitFor();
     } finally {
       await other.close();
@@ -121,7 +130,17 @@ describe('people and invitations', () => {
     await page.getByText('Your new password is set').waitFor();
     await page.getByRole('link', { name: 'Sign in' }).click();
     await signIn(page, browser.baseUrl, demo.copy_desk.email, demoPassword);
-    expect(await navLinks(page)).toEqual(['Desk', 'Account']);
+    expect(await navLinks(page)).toEqual([
+      'Desk',
+      'Claims',
+      'Awaiting sign-off',
+      'Cleared to publish',
+      'Search',
+      'Datasets',
+      'Workbench',
+      'Rating scale',
+      'Account',
+    ]);
     await page.close();
   });
 });

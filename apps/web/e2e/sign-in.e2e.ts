@@ -46,10 +46,52 @@ describe('signing in to the desk', () => {
   });
 
   const expectedNav = {
-    desk_chief: ['Desk', 'People', 'Account'],
-    science_editor: ['Desk', 'Account'],
-    copy_desk: ['Desk', 'Account'],
-    reporter: ['Desk', 'Account'],
+    desk_chief: [
+      'Desk',
+      'Claims',
+      'Awaiting sign-off',
+      'Cleared to publish',
+      'File a claim',
+      'Search',
+      'Datasets',
+      'Workbench',
+      'Rating scale',
+      'People',
+      'Outbox',
+      'Audit trail',
+      'Account',
+    ],
+    science_editor: [
+      'Desk',
+      'Claims',
+      'File a claim',
+      'Search',
+      'Datasets',
+      'Workbench',
+      'Rating scale',
+      'Account',
+    ],
+    copy_desk: [
+      'Desk',
+      'Claims',
+      'Awaiting sign-off',
+      'Cleared to publish',
+      'Search',
+      'Datasets',
+      'Workbench',
+      'Rating scale',
+      'Account',
+    ],
+    reporter: [
+      'Desk',
+      'Claims',
+      'File a claim',
+      'Search',
+      'Datasets',
+      'Workbench',
+      'Rating scale',
+      'Account',
+    ],
   } as const;
 
   it.each(roles)('shows a %s the navigation of their role', async (role: Role) => {

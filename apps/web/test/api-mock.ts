@@ -8,6 +8,8 @@ export interface RecordedRequest {
   headers: Headers;
   /** The parsed JSON, or the FormData of a multipart upload. */
   body: unknown;
+  /** The request's abort signal, to check that a stale request was cancelled. */
+  signal: AbortSignal | undefined;
 }
 
 export interface MockReply {
@@ -64,13 +66,15 @@ export function mockApi(initialRoutes: Routes) {
           : init?.body instanceof FormData
             ? init.body
             : undefined,
+      signal: init?.signal ?? undefined,
     };
     requests.push(request);
     const route = routes[`${method} ${url.pathname}`];
     if (!route) throw new Error(`Unexpected request in test: ${method} ${url.pathname}`);
     const reply = typeof route === 'function' ? await route(request) : route;
     if (reply.body instanceof Blob) {
-      return new Response(reply.body, {
+      // jsdom's Blob is not the one Node's Response knows: hand it the bytes.
+      return new Response(await reply.body.arrayBuffer(), {
         status: reply.status,
         headers: { 'Content-Type': reply.body.type },
       });

@@ -1,5 +1,5 @@
 import '@testing-library/jest-dom/vitest';
-import { cleanup } from '@testing-library/react';
+import { cleanup, configure } from '@testing-library/react';
 import { afterEach } from 'vitest';
 import { setAccessToken } from '@/lib/api-client';
 
@@ -16,6 +16,10 @@ Range.prototype.getBoundingClientRect ??= () => new DOMRect(0, 0, 0, 0);
 Range.prototype.getClientRects ??= () =>
   ({ length: 0, item: () => null, [Symbol.iterator]: [][Symbol.iterator] }) as DOMRectList;
 document.elementFromPoint ??= () => null;
+
+// Lazy routes load their module on first use (the claim page's pulls in several
+// features); on a busy two-core machine with other suites running that can pass 3 s.
+configure({ asyncUtilTimeout: 10_000 });
 
 afterEach(() => {
   cleanup();

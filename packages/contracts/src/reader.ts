@@ -43,7 +43,10 @@ export interface PublicationView {
   scheduledTimeZone: string | null;
   publishedAt: string | null;
   note: { kind: UpdateNoteKind; text: string } | null;
+  /** This publication's own address. */
   url: string;
+  /** The explainer's address for readers (always its latest publication); null before the first. */
+  readerUrl: string | null;
 }
 
 // ——— What the reader pages are rendered from (built by the API from published records only) ———

@@ -19,6 +19,7 @@ export function toPublicationView(
       ? { kind: publication.noteKind, text: publication.noteText ?? '' }
       : null,
     url: slug ? publicationUrl(appUrl, slug, publication.sequence) : '',
+    readerUrl: slug ? explainerUrl(appUrl, slug) : null,
   };
 }
 

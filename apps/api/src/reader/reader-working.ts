@@ -1,4 +1,4 @@
-import { calculators, references, type InputSpec } from '@skyledger/calc';
+import { calculators, displayUnit, references, type InputSpec } from '@skyledger/calc';
 import {
   type ReaderWorking,
   type ReaderWorkingInput,
@@ -12,7 +12,7 @@ const format = (value: number) => number.format(value);
 
 /** An input as a reader reads it: value with unit, a range, a series' length, a choice. */
 function formatInput(spec: InputSpec, value: unknown, datasetNote: string | null): string {
-  const unit = 'unit' in spec && spec.unit ? ` ${spec.unit}` : '';
+  const unit = 'unit' in spec && spec.unit ? ` ${displayUnit(spec.unit)}` : '';
   if (typeof value === 'number') return `${format(value)}${unit}`;
   if (typeof value === 'string') {
     const choice = spec.kind === 'choice' ? spec.choices.find((c) => c.value === value) : undefined;
@@ -47,7 +47,11 @@ export function toReaderWorking(
   datasetNames: ReadonlyMap<string, string>,
 ): ReaderWorking {
   const calculator = calculators.find((candidate) => candidate.id === working.calculatorId);
-  const inputs: ReaderWorkingInput[] = (calculator?.inputs ?? []).map((spec) => {
+  // Optional inputs the working left out played no part: they are not listed.
+  const used = (calculator?.inputs ?? []).filter(
+    (spec) => working.inputs[spec.name] !== null && working.inputs[spec.name] !== undefined,
+  );
+  const inputs: ReaderWorkingInput[] = used.map((spec) => {
     const value = working.inputs[spec.name];
     const ref = working.datasetRefs?.[spec.name]?.[0];
     const atDefault = JSON.stringify(value) === JSON.stringify(spec.default);

@@ -41,8 +41,11 @@ import {
 } from './render';
 import { READER_PAGE_SIZE, ReaderService } from './reader.service';
 
-/** Reader pages may be cached briefly; ETags (Express's default) make revalidation cheap. */
-const PAGE_CACHE = 'public, max-age=60, stale-while-revalidate=300';
+/**
+ * Reader pages may be kept, but are checked again on every view: an update note must show
+ * at once. The ETag (Express's default) makes that check a cheap 304.
+ */
+const PAGE_CACHE = 'public, no-cache';
 const EMBED_WIDTH = 480;
 const EMBED_HEIGHT = 180;
 

@@ -109,7 +109,7 @@ export async function signoffChecklist(
       'Right of reply logged or waived',
       latest !== undefined || claim.replyWaiverReason !== null,
       latest
-        ? `${attempts.length} attempt${attempts.length === 1 ? '' : 's'} logged, the latest by ${replyChannelLabels[latest.channel].toLowerCase()} to ${latest.contacted}`
+        ? `${attempts.length} attempt${attempts.length === 1 ? '' : 's'} logged, the latest to ${latest.contacted} (${replyChannelLabels[latest.channel].toLowerCase()})`
         : claim.replyWaiverReason
           ? `Waived by ${waiver?.displayName ?? 'a desk chief'}: ${claim.replyWaiverReason}`
           : 'Log an attempt to reach the claimant, or ask a desk chief to waive it with a reason',

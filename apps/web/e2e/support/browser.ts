@@ -16,12 +16,18 @@ export interface Browser {
   close(): Promise<void>;
 }
 
+export interface BrowserOptions {
+  /** False to read pages as a browser with JavaScript turned off would. */
+  javaScriptEnabled?: boolean;
+}
+
 /** Debian's Chromium, headless, with a fresh profile under the project's ignored tmp/. */
-export async function openBrowser(): Promise<Browser> {
+export async function openBrowser(options: BrowserOptions = {}): Promise<Browser> {
   mkdirSync(tmpDir, { recursive: true });
   mkdirSync(screenshotDir, { recursive: true });
   const profile = mkdtempSync(join(tmpDir, 'chr-'));
   const context = await chromium.launchPersistentContext(profile, {
+    ...options,
     executablePath: '/usr/bin/chromium',
     headless: true,
     args: [
@@ -73,10 +79,10 @@ export async function screenshot(page: Page, name: string): Promise<void> {
 }
 
 /** Opens one browser for the enclosing suite and closes it after; call inside `describe`. */
-export function useBrowser(): () => Browser {
+export function useBrowser(options?: BrowserOptions): () => Browser {
   let browser: Browser | undefined;
   beforeAll(async () => {
-    browser = await openBrowser();
+    browser = await openBrowser(options);
   });
   afterAll(() => browser?.close());
   return () => {

@@ -38,3 +38,28 @@ export async function signIn(
 export async function navLinks(page: Page): Promise<string[]> {
   return page.getByRole('navigation', { name: 'Desk sections' }).getByRole('link').allInnerTexts();
 }
+
+/**
+ * The desk's API as one of the demo people, outside the browser's own session: for the
+ * steps of a flow that a test sets up rather than walks through.
+ */
+export async function deskApi(baseUrl: string, email: string, password = demoPassword) {
+  const signedIn = await fetch(`${baseUrl}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  });
+  if (!signedIn.ok) throw new Error(`signing in as ${email} failed: ${signedIn.status}`);
+  const { accessToken } = (await signedIn.json()) as { accessToken: string };
+  return async <T>(method: 'GET' | 'POST' | 'PATCH' | 'DELETE', path: string, body?: unknown) => {
+    const response = await fetch(`${baseUrl}/api${path}`, {
+      method,
+      headers: { Authorization: `Bearer ${accessToken}`, 'Content-Type': 'application/json' },
+      ...(body === undefined ? {} : { body: JSON.stringify(body) }),
+    });
+    if (!response.ok) {
+      throw new Error(`${method} ${path} as ${email}: ${response.status} ${await response.text()}`);
+    }
+    return (await response.json()) as T;
+  };
+}

@@ -63,8 +63,60 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
               children: [
                 { index: true, lazy: lazy(() => import('./routes/app/desk-home')) },
                 {
+                  path: paths.app.queue.path,
+                  lazy: lazy(() => import('./routes/app/claims-queue')),
+                },
+                {
+                  path: paths.app.fileClaim.path,
+                  lazy: lazy(() => import('./routes/app/file-claim')),
+                },
+                {
+                  path: paths.app.claim.path,
+                  lazy: lazy(() => import('./routes/app/claim')),
+                },
+                {
+                  path: paths.app.verdict.path,
+                  lazy: lazy(() => import('./routes/app/verdict')),
+                },
+                {
+                  path: paths.app.signoff.path,
+                  lazy: lazy(() => import('./routes/app/signoff')),
+                },
+                {
+                  path: paths.app.search.path,
+                  lazy: lazy(() => import('./routes/app/search')),
+                },
+                {
+                  path: paths.app.datasets.path,
+                  lazy: lazy(() => import('./routes/app/datasets')),
+                },
+                {
+                  path: paths.app.newDataset.path,
+                  lazy: lazy(() => import('./routes/app/new-dataset')),
+                },
+                {
+                  path: paths.app.dataset.path,
+                  lazy: lazy(() => import('./routes/app/dataset')),
+                },
+                {
+                  path: paths.app.workbench.path,
+                  lazy: lazy(() => import('./routes/app/workbench')),
+                },
+                {
                   path: paths.app.people.path,
                   lazy: lazy(() => import('./routes/app/people')),
+                },
+                {
+                  path: paths.app.ratingScale.path,
+                  lazy: lazy(() => import('./routes/app/rating-scale')),
+                },
+                {
+                  path: paths.app.outbox.path,
+                  lazy: lazy(() => import('./routes/app/outbox')),
+                },
+                {
+                  path: paths.app.audit.path,
+                  lazy: lazy(() => import('./routes/app/audit')),
                 },
                 {
                   path: paths.app.account.path,

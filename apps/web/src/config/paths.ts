@@ -32,7 +32,54 @@ export const paths = {
       getHref: (claimId: string, section?: string) =>
         `/claims/${encodeURIComponent(claimId)}${section ? `#${section}` : ''}`,
     },
+    verdict: {
+      path: '/claims/:claimId/verdict',
+      getHref: (claimId: string) => `/claims/${encodeURIComponent(claimId)}/verdict`,
+    },
+    signoff: {
+      path: '/claims/:claimId/signoff',
+      getHref: (claimId: string) => `/claims/${encodeURIComponent(claimId)}/signoff`,
+    },
+    search: {
+      path: '/search',
+      /** The search page; `search` holds the words and filters, as the page writes them into the URL. */
+      getHref: (search?: URLSearchParams | string) => {
+        const query = search?.toString();
+        return query ? `/search?${query}` : '/search';
+      },
+    },
+    datasets: { path: '/datasets', getHref: () => '/datasets' },
+    newDataset: { path: '/datasets/new', getHref: () => '/datasets/new' },
+    dataset: {
+      path: '/datasets/:datasetId',
+      getHref: (datasetId: string) => `/datasets/${encodeURIComponent(datasetId)}`,
+    },
+    workbench: {
+      path: '/workbench/:calculatorId?',
+      /** The workbench, on one calculator and saving to one claim when given. */
+      getHref: (calculatorId?: string, claimId?: string) => {
+        const path = calculatorId ? `/workbench/${encodeURIComponent(calculatorId)}` : '/workbench';
+        return claimId ? `${path}?${new URLSearchParams({ claim: claimId }).toString()}` : path;
+      },
+    },
     people: { path: '/people', getHref: () => '/people' },
+    ratingScale: { path: '/rating-scale', getHref: () => '/rating-scale' },
+    outbox: {
+      path: '/outbox',
+      /** The outbox; `search` holds the state tab and page, as the page writes them into the URL. */
+      getHref: (search?: URLSearchParams | string) => {
+        const query = search?.toString();
+        return query ? `/outbox?${query}` : '/outbox';
+      },
+    },
+    audit: {
+      path: '/audit',
+      /** The audit trail; `search` holds its filters, as the page writes them into the URL. */
+      getHref: (search?: URLSearchParams | string) => {
+        const query = search?.toString();
+        return query ? `/audit?${query}` : '/audit';
+      },
+    },
     account: { path: '/account', getHref: () => '/account' },
   },
 } as const;

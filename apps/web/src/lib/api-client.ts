@@ -169,8 +169,10 @@ export const api = {
     apiRequest<T>(path, { ...options, method: 'POST', body }),
   patch: <T>(path: string, body: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
     apiRequest<T>(path, { ...options, method: 'PATCH', body }),
+  put: <T>(path: string, body: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+    apiRequest<T>(path, { ...options, method: 'PUT', body }),
   delete: (path: string) => apiRequest<void>(path, { method: 'DELETE' }),
   /** The bytes at a path, with the bearer token: for files that an <img src> could not fetch. */
-  blob: (path: string, options?: Pick<RequestOptions, 'signal'>) =>
+  blob: (path: string, options?: Pick<RequestOptions, 'signal' | 'params'>) =>
     apiRequest<Blob>(path, { ...options, method: 'GET', responseType: 'blob' }),
 };

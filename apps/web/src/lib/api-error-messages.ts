@@ -28,6 +28,11 @@ const fieldCodeMessages: Record<string, string> = {
   notAllowed: 'This cannot be sent here',
   alreadyLinked: 'This source is already cited for this claim',
   notAssignable: 'This person cannot research claims',
+  unsupportedType:
+    'The desk takes PDF, PNG, JPEG, WebP, CSV and plain-text files only, read from the bytes themselves',
+  tooLarge: 'This file is larger than the desk accepts',
+  notOnClaim: 'Choose a file uploaded to this claim',
+  doiOrUrlRequired: 'Give a DOI or a web address so others can find the source',
 };
 
 /** Field-specific wording where the generic words would be vague. */
@@ -64,13 +69,17 @@ export function errorMessage(error: unknown): string {
  * Words for a failed change: the stale-version sentence the screen chose, the first broken
  * rule in words, or what `errorMessage` says.
  */
-export function changeErrorMessage(error: unknown, staleMessage: string): string {
+export function changeErrorMessage(
+  error: unknown,
+  staleMessage: string,
+  overrides: FieldCodeOverrides = {},
+): string {
   if (isApiError(error) && error.status === 409 && error.body.fields?.version === 'stale') {
     return staleMessage;
   }
   const firstField = isApiError(error) ? Object.entries(error.body.fields ?? {})[0] : undefined;
   if (isApiError(error) && firstField) {
-    return fieldErrorMessage(firstField[0], firstField[1], error.message);
+    return fieldErrorMessage(firstField[0], firstField[1], error.message, overrides);
   }
   return errorMessage(error);
 }

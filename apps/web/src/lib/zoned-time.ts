@@ -104,16 +104,3 @@ export function timeZoneNames(include: string): string[] {
   names.add(include);
   return [...names];
 }
-
-/** "30 Nov 2026, 18:05 GMT+1" as seen in the given zone. */
-export function formatInZone(iso: string, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-GB', {
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    hour: '2-digit',
-    minute: '2-digit',
-    timeZone,
-    timeZoneName: 'short',
-  }).format(new Date(iso));
-}

@@ -13,7 +13,7 @@ export function LiveNotice({ notice }: { notice: Notice | null }) {
   return (
     <Box role="status" aria-live="polite">
       {notice ? (
-        <Callout.Root color={notice.tone === 'success' ? 'jade' : 'red'} size="1">
+        <Callout.Root color={notice.tone === 'success' ? 'jade' : 'red'} size="1" highContrast>
           <Callout.Icon>
             {notice.tone === 'success' ? (
               <CheckCircledIcon aria-hidden />

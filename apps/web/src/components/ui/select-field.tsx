@@ -13,6 +13,8 @@ interface SelectFieldProps<V extends string> {
   error?: string;
   disabled?: boolean;
   triggerRef?: Ref<HTMLButtonElement>;
+  /** Shown while nothing is chosen (`value` is ''). */
+  placeholder?: string;
 }
 
 /** A labelled Radix Select whose trigger carries the field's hint and error. */
@@ -26,6 +28,7 @@ export function SelectField<V extends string>({
   error,
   disabled,
   triggerRef,
+  placeholder,
 }: SelectFieldProps<V>) {
   const ids = useFieldIds();
   const isOption = (candidate: string): candidate is V =>
@@ -45,6 +48,7 @@ export function SelectField<V extends string>({
           ref={triggerRef}
           id={ids.controlId}
           aria-labelledby={ids.labelId}
+          placeholder={placeholder}
           {...describedBy(ids, hint, error)}
         />
         <Select.Content position="popper">

@@ -3,6 +3,7 @@ import { roleLabels, userStatusLabels } from '@skyledger/contracts';
 import { DocumentTitle } from '@/components/ui/document-title';
 import { useCurrentUser } from '@/features/auth/current-user';
 import { SignOutButton } from '@/features/auth/components/sign-out-button';
+import { NotificationSettings } from '@/features/notifications/components/notification-settings';
 
 export function Component() {
   const user = useCurrentUser();
@@ -33,6 +34,7 @@ export function Component() {
           </DataList.Item>
         </DataList.Root>
       </Card>
+      <NotificationSettings />
       <Text as="p" color="gray" className="sl-prose" size="2">
         A desk chief sets names and roles. To change your password, sign out and use &ldquo;Forgot
         your password?&rdquo; on the sign-in page.

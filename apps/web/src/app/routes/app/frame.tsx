@@ -14,7 +14,7 @@ import { paths } from '@/config/paths';
 import { sessionQueryOptions, useSession } from '@/features/auth/api/get-session';
 import { SignOutButton } from '@/features/auth/components/sign-out-button';
 import { CurrentUserProvider } from '@/features/auth/current-user';
-import { navItemsFor } from '../../nav-items';
+import { navItemsFor, type NavItem } from '../../nav-items';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -27,8 +27,17 @@ export const clientLoader =
     return null;
   };
 
-function isCurrent(pathname: string, to: string): boolean {
-  return to === paths.app.desk.getHref() ? pathname === to : pathname.startsWith(to);
+function isUnder(pathname: string, to: string): boolean {
+  return to === paths.app.desk.getHref()
+    ? pathname === to
+    : pathname === to || pathname.startsWith(`${to}/`);
+}
+
+/** The item whose address is the longest start of the path: /claims/new is "File a claim". */
+function currentItem(pathname: string, items: readonly NavItem[]): NavItem | undefined {
+  return items
+    .filter((item) => isUnder(pathname, item.to))
+    .sort((a, b) => b.to.length - a.to.length)[0];
 }
 
 export function Component() {
@@ -38,6 +47,8 @@ export function Component() {
 
   // Only between a session ending and the move to the sign-in page.
   if (!user) return null;
+  const items = navItemsFor(user.role);
+  const current = currentItem(pathname, items);
 
   return (
     <Flex direction="column" minHeight="100vh">
@@ -63,9 +74,9 @@ export function Component() {
               <SignOutButton />
             </Flex>
           </Flex>
-          <TabNav.Root aria-label="Desk sections" size="2">
-            {navItemsFor(user.role).map((item) => (
-              <TabNav.Link key={item.id} asChild active={isCurrent(pathname, item.to)}>
+          <TabNav.Root aria-label="Desk sections" size="2" className="sl-scroll-x">
+            {items.map((item) => (
+              <TabNav.Link key={item.id} asChild active={item === current}>
                 <RouterLink to={item.to}>{item.label}</RouterLink>
               </TabNav.Link>
             ))}

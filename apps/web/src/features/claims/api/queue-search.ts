@@ -4,6 +4,7 @@ import {
   type ClaimQueueQuery,
   type ClaimSortField,
 } from '@skyledger/contracts';
+import { readUrlQuery, writeUrlQuery } from '@/lib/url-query';
 
 type QueueKey = keyof ClaimQueueQuery;
 const queueKeys = Object.keys(claimQueueQuerySchema.shape) as QueueKey[];
@@ -15,31 +16,14 @@ export const queueDefaults = {
   pageSize: CLAIM_PAGE_SIZE_DEFAULT,
 } as const satisfies ClaimQueueQuery;
 
-/**
- * The queue's filters from the page's URL, each checked by the API's own schema. A
- * parameter that fails its rule (a hand-edited `?status=lost`) is dropped on its own,
- * so the rest of a shared view still applies.
- */
+/** The queue's filters from the page's URL, each checked by the API's own schema. */
 export function parseQueueSearch(searchParams: URLSearchParams): ClaimQueueQuery {
-  const query: Record<string, unknown> = {};
-  for (const key of queueKeys) {
-    const raw = searchParams.get(key);
-    if (raw === null || raw === '') continue;
-    const parsed = claimQueueQuerySchema.shape[key].safeParse(raw);
-    if (parsed.success && parsed.data !== undefined) query[key] = parsed.data;
-  }
-  return query as ClaimQueueQuery;
+  return readUrlQuery(claimQueueQuerySchema, searchParams);
 }
 
 /** The URL search parameters for a queue view, in one order, leaving out the defaults. */
 export function queueSearchParams(query: ClaimQueueQuery): URLSearchParams {
-  const params = new URLSearchParams();
-  for (const key of queueKeys) {
-    const value = query[key];
-    if (value === undefined || value === (queueDefaults as ClaimQueueQuery)[key]) continue;
-    params.set(key, String(value));
-  }
-  return params;
+  return writeUrlQuery(claimQueueQuerySchema, query, queueDefaults);
 }
 
 /** The same view with some filters changed; any change of filter goes back to page 1. */

@@ -1,8 +1,8 @@
 import { Table, VisuallyHidden } from '@radix-ui/themes';
 import type { UserListItem, UserSortField } from '@skyledger/contracts';
+import { SortableColumnHeader } from '@/components/ui/sortable-column-header';
 import type { UsersSort } from '../api/get-users';
 import type { ShowNotice } from './people-notice';
-import { SortableColumnHeader } from './sortable-column-header';
 import { UserRow } from './user-row';
 
 const sortableColumns: readonly { field: UserSortField; label: string }[] = [
@@ -33,10 +33,9 @@ export function PeopleTable({ users, sort, onSort, currentUserId, onNotice }: Pe
           {sortableColumns.map(({ field, label }) => (
             <SortableColumnHeader
               key={field}
-              field={field}
               label={label}
-              current={sort}
-              onSort={onSort}
+              sorted={sort.sort === field ? sort.order : false}
+              onSort={() => onSort(field)}
             />
           ))}
           <Table.ColumnHeaderCell>Actions</Table.ColumnHeaderCell>

@@ -1,0 +1,4 @@
+export const notificationKeys = {
+  all: ['notifications'] as const,
+  settings: () => [...notificationKeys.all, 'settings'] as const,
+};

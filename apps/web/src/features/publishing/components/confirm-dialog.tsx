@@ -1,0 +1,69 @@
+import { AlertDialog, Button, Flex } from '@radix-ui/themes';
+import { useState, type ReactNode } from 'react';
+import { FormError } from '@/components/ui/form-error';
+import { refusalMessage } from '@/features/verdicts/verdict-words';
+
+interface ConfirmDialogProps {
+  /** The button that opens the dialog. */
+  trigger: ReactNode;
+  title: string;
+  description: ReactNode;
+  confirmLabel: string;
+  keepLabel: string;
+  color: 'red' | 'blue';
+  /** Runs the change; the dialog closes when it succeeds and shows the API's refusal if not. */
+  onConfirm: () => Promise<unknown>;
+}
+
+/** Asks before a change that readers or the desk would feel, and says why it was refused. */
+export function ConfirmDialog({
+  trigger,
+  title,
+  description,
+  confirmLabel,
+  keepLabel,
+  color,
+  onConfirm,
+}: ConfirmDialogProps) {
+  const [open, setOpen] = useState(false);
+  const [pending, setPending] = useState(false);
+  const [refusal, setRefusal] = useState<string>();
+  const confirm = () => {
+    setPending(true);
+    setRefusal(undefined);
+    onConfirm()
+      .then(
+        () => setOpen(false),
+        (error: unknown) => setRefusal(refusalMessage(error)),
+      )
+      .finally(() => setPending(false));
+  };
+  return (
+    <AlertDialog.Root
+      open={open}
+      onOpenChange={(next) => {
+        setOpen(next);
+        if (!next) setRefusal(undefined);
+      }}
+    >
+      <AlertDialog.Trigger>{trigger}</AlertDialog.Trigger>
+      <AlertDialog.Content maxWidth="520px">
+        <AlertDialog.Title>{title}</AlertDialog.Title>
+        <AlertDialog.Description size="2">{description}</AlertDialog.Description>
+        <Flex direction="column" gap="3" mt="4">
+          <FormError message={refusal} />
+          <Flex gap="3" justify="end" wrap="wrap">
+            <AlertDialog.Cancel>
+              <Button variant="soft" color="gray" highContrast disabled={pending}>
+                {keepLabel}
+              </Button>
+            </AlertDialog.Cancel>
+            <Button color={color} highContrast loading={pending} onClick={confirm}>
+              {confirmLabel}
+            </Button>
+          </Flex>
+        </Flex>
+      </AlertDialog.Content>
+    </AlertDialog.Root>
+  );
+}

@@ -1,0 +1,4 @@
+export const ratingLevelKeys = {
+  all: ['rating-levels'] as const,
+  list: () => [...ratingLevelKeys.all, 'list'] as const,
+};

@@ -1,0 +1,41 @@
+import { UpdateIcon } from '@radix-ui/react-icons';
+import { Button, Flex } from '@radix-ui/themes';
+import type { SearchReindexResponse } from '@skyledger/contracts';
+import { useState } from 'react';
+import { LiveNotice, type Notice } from '@/components/ui/live-notice';
+import { errorMessage } from '@/lib/api-error-messages';
+import { useReindexSearch } from '../api/reindex-search';
+
+const count = new Intl.NumberFormat('en-GB');
+
+function describeRebuild({ documents, milliseconds }: SearchReindexResponse): string {
+  const took = milliseconds < 1000 ? `${milliseconds} ms` : `${(milliseconds / 1000).toFixed(1)} s`;
+  return `The index is rebuilt: ${count.format(documents)} ${documents === 1 ? 'document' : 'documents'} in ${took}.`;
+}
+
+/** The desk chief's rebuild of the search index from the database, with what it did. */
+export function ReindexButton() {
+  const reindex = useReindexSearch();
+  const [notice, setNotice] = useState<Notice | null>(null);
+  return (
+    <Flex direction="column" gap="2" align={{ initial: 'start', sm: 'end' }}>
+      <Button
+        variant="soft"
+        color="gray"
+        highContrast
+        loading={reindex.isPending}
+        onClick={() => {
+          setNotice(null);
+          reindex.mutate(undefined, {
+            onSuccess: (result) => setNotice({ tone: 'success', text: describeRebuild(result) }),
+            onError: (error) => setNotice({ tone: 'problem', text: errorMessage(error) }),
+          });
+        }}
+      >
+        <UpdateIcon aria-hidden />
+        Rebuild the index
+      </Button>
+      <LiveNotice notice={notice} />
+    </Flex>
+  );
+}

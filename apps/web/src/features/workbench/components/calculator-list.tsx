@@ -1,0 +1,46 @@
+import { Card, Flex, Grid, Heading, Link, Text } from '@radix-ui/themes';
+import { calculators } from '@skyledger/calc';
+import { Link as RouterLink } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import '../workbench.css';
+
+/** Every calculator of the library, each opening its own form; a claim to save to goes along. */
+export function CalculatorList({ claimId }: { claimId: string | null }) {
+  return (
+    <Flex direction="column" gap="5">
+      <Flex direction="column" gap="1">
+        <Heading as="h1" size="7">
+          Workbench
+        </Heading>
+        <Text as="p" color="gray" className="sl-prose">
+          Back-of-envelope checks with published defaults. Each result is worked out as you type,
+          step by step, with the limits of its model beside it.
+        </Text>
+      </Flex>
+      <Grid asChild columns={{ initial: '1', sm: '2', lg: '3' }} gap="4">
+        <ul className="sl-card-list sl-wb-cards">
+          {calculators.map((calculator) => (
+            <li key={calculator.id}>
+              <Card size="2">
+                <Flex direction="column" gap="2">
+                  <Heading as="h2" size="4">
+                    <Link asChild>
+                      <RouterLink
+                        to={paths.app.workbench.getHref(calculator.id, claimId ?? undefined)}
+                      >
+                        {calculator.title}
+                      </RouterLink>
+                    </Link>
+                  </Heading>
+                  <Text as="p" size="2">
+                    {calculator.summary}
+                  </Text>
+                </Flex>
+              </Card>
+            </li>
+          ))}
+        </ul>
+      </Grid>
+    </Flex>
+  );
+}

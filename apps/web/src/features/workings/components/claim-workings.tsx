@@ -1,0 +1,63 @@
+import { Callout, Flex, Heading, Spinner, Text } from '@radix-ui/themes';
+import { useState } from 'react';
+import { LiveNotice, type Notice } from '@/components/ui/live-notice';
+import { useCurrentUser } from '@/features/auth/current-user';
+import { errorMessage } from '@/lib/api-error-messages';
+import { useCalculators } from '../api/get-calculators';
+import { useClaimWorkings } from '../api/get-claim-workings';
+import { WorkingCard } from './working-card';
+
+/**
+ * The workings saved on a claim, oldest first: each calculator's inputs, outputs, band,
+ * steps and cautions as the server computed them, with the editor's note.
+ */
+export function ClaimWorkings({ claimId }: { claimId: string }) {
+  const user = useCurrentUser();
+  const workings = useClaimWorkings(claimId);
+  // Titles and labels only; a working still shows, by its ids, if these fail to load.
+  const catalogue = useCalculators();
+  const [notice, setNotice] = useState<Notice | null>(null);
+  const calculatorOf = (id: string) =>
+    catalogue.data?.calculators.find((calculator) => calculator.id === id);
+
+  return (
+    <Flex direction="column" gap="4">
+      <Flex direction="column" gap="1">
+        <Heading as="h2" size="5">
+          Workings
+        </Heading>
+        <Text size="2" color="gray">
+          Back-of-envelope checks run on this claim. The server computes every result from the
+          inputs alone; these are estimates with the limits shown, not climate model output.
+        </Text>
+      </Flex>
+      <LiveNotice notice={notice} />
+      {workings.isPending || catalogue.isPending ? (
+        <Flex align="center" gap="3" role="status">
+          <Spinner />
+          <Text color="gray">Loading the workings…</Text>
+        </Flex>
+      ) : workings.isError ? (
+        <Callout.Root color="red" role="alert">
+          <Callout.Text>{errorMessage(workings.error)}</Callout.Text>
+        </Callout.Root>
+      ) : workings.data.length === 0 ? (
+        <Text color="gray">No workings on this claim yet.</Text>
+      ) : (
+        <ul className="sl-card-list sl-workings" aria-label="Workings, oldest first">
+          {workings.data.map((working) => (
+            <li key={working.id}>
+              <WorkingCard
+                claimId={claimId}
+                working={working}
+                calculator={calculatorOf(working.calculatorId)}
+                user={user}
+                onNotice={setNotice}
+              />
+            </li>
+          ))}
+        </ul>
+      )}
+    </Flex>
+  );
+}
