@@ -31,6 +31,31 @@ const bodyParserMessages: Record<string, string> = {
   'charset.unsupported': 'The request body has an unsupported charset',
 };
 
+/** Driver codes meaning the database cannot be reached now (not that a query was wrong). */
+const unavailableCodes = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EPIPE',
+  'PROTOCOL_CONNECTION_LOST',
+  'PROTOCOL_SEQUENCE_TIMEOUT',
+  'ER_CON_COUNT_ERROR',
+  'ER_SERVER_SHUTDOWN',
+  'ER_QUERY_INTERRUPTED',
+  'ER_CONNECTION_KILLED',
+]);
+
+/** True when the error (or what it wraps) says the database is down or unreachable. */
+export function isDatabaseUnavailable(exception: unknown): boolean {
+  for (let error = exception, depth = 0; error && depth < 4; depth += 1) {
+    const code = (error as { code?: unknown }).code;
+    if (typeof code === 'string' && unavailableCodes.has(code)) return true;
+    error =
+      (error as { driverError?: unknown }).driverError ?? (error as { cause?: unknown }).cause;
+  }
+  return false;
+}
+
 export function toErrorBody(exception: unknown): ApiErrorBody {
   // Nest's Express adapter wraps body-parser errors; their own type says more than their text.
   const parserError = exception instanceof HttpException ? exception.cause : exception;
@@ -52,6 +77,12 @@ export function toErrorBody(exception: unknown): ApiErrorBody {
     return { ...body(status, text), ...(fields ? { fields } : {}) };
   }
   if (isClientHttpError(exception)) return body(exception.status, exception.message);
+  if (isDatabaseUnavailable(exception)) {
+    return body(
+      HttpStatus.SERVICE_UNAVAILABLE,
+      'The desk’s database cannot be reached just now. Try again in a moment',
+    );
+  }
   if (
     exception instanceof QueryFailedError &&
     (exception.driverError as { code?: string }).code === 'ER_DUP_ENTRY'
@@ -78,6 +109,8 @@ export class ApiExceptionFilter implements ExceptionFilter {
       );
     }
     if (response.headersSent) return;
+    if (errorBody.statusCode === HttpStatus.SERVICE_UNAVAILABLE)
+      response.setHeader('Retry-After', '5');
     response.status(errorBody.statusCode).json(errorBody);
   }
 }
