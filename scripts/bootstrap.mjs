@@ -1,8 +1,8 @@
 #!/usr/bin/env node
-// The first step of `npm start`, `npm test` and `npm run db:*`. It runs before any npm
-// package is installed, so it is plain JavaScript with Node's built-ins only; it makes
-// sure the system packages and the npm packages are there, then hands over to the
-// TypeScript dev stack (packages/devstack) through tsx.
+// The first step of `npm start`, `npm test`, `npm run test:faults`, `npm run bench` and
+// `npm run db:*`. It runs before any npm package is installed, so it is plain JavaScript
+// with Node's built-ins only; it makes sure the system packages and the npm packages are
+// there, then hands over to the TypeScript dev stack (packages/devstack) through tsx.
 import { spawnSync, spawn } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
@@ -89,6 +89,9 @@ checkNode();
 const commands = {
   start: [systemNeeds.mariadb],
   test: [systemNeeds.mariadb, systemNeeds.chromium],
+  'test:faults': [systemNeeds.mariadb],
+  bench: [systemNeeds.mariadb],
+  'bench:quick': [systemNeeds.mariadb],
   'db:start': [systemNeeds.mariadb],
   'db:stop': [],
   'db:status': [],

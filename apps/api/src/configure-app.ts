@@ -19,6 +19,11 @@ export function configureApp(app: INestApplication): INestApplication {
         directives: {
           defaultSrc: ["'self'"],
           scriptSrc: ["'self'"],
+          // Inline styles stay allowed for the desk: Radix Themes sets style attributes, and
+          // Radix ScrollArea and react-remove-scroll (dialogs) insert <style> elements whose
+          // text varies, so neither a hash nor 'self' alone covers them. Script stays 'self'
+          // only. Reader pages and stored files get stricter policies of their own
+          // (reader/reader-policy.ts, attachments/stored-file-response.ts).
           styleSrc: ["'self'", "'unsafe-inline'"],
           // blob: for previews of evidence files the desk fetches with its token.
           imgSrc: ["'self'", 'data:', 'blob:'],

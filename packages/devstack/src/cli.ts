@@ -2,6 +2,7 @@ import { rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { backupCommand, restoreCommand } from './backup-commands.js';
 import * as mariadb from './mariadb.js';
+import { runFaultTests } from './fault-tests.js';
 import { dataDir } from './paths.js';
 import { StepFailedError } from './processes.js';
 import { startStack } from './start.js';
@@ -10,6 +11,10 @@ import { runAllTests } from './test-run.js';
 const commands: Record<string, () => Promise<number>> = {
   start: startStack,
   test: runAllTests,
+  'test:faults': runFaultTests,
+  // Loaded on demand: the benchmark reads packages that only exist once they are built.
+  bench: async () => (await import('./bench/run-bench.js')).runBench('full'),
+  'bench:quick': async () => (await import('./bench/run-bench.js')).runBench('quick'),
   'db:start': async () => {
     const started = await mariadb.start();
     const { port, datadir } = mariadb.status();

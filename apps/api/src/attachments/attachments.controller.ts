@@ -1,11 +1,7 @@
-import { Controller, Get, Post, StreamableFile, UploadedFile } from '@nestjs/common';
+import { Controller, Get, Post, Res, StreamableFile, UploadedFile } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import {
-  inlineMediaTypes,
-  type AttachmentMediaType,
-  type AttachmentView,
-} from '@skyledger/contracts';
-import { create as contentDisposition } from 'content-disposition';
+import { type AttachmentView } from '@skyledger/contracts';
+import { type Response } from 'express';
 import { type AuthenticatedUser } from '../auth/authenticated-user';
 import { claimRoles } from '../claims/claim-policy';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -14,6 +10,7 @@ import { UuidParam } from '../common/decorators/uuid-param.decorator';
 import { AttachmentsService } from './attachments.service';
 import { FileUpload, requireFile } from './file-upload.decorator';
 import { type ReceivedFile } from './staging-multer-storage';
+import { storedFileResponse } from './stored-file-response';
 
 @ApiTags('attachments')
 @ApiBearerAuth()
@@ -38,15 +35,11 @@ export class AttachmentsController {
 
   /** The bytes of an evidence file: images and PDFs inline, everything else as a download. */
   @Get('attachments/:id')
-  async download(@UuidParam() id: string): Promise<StreamableFile> {
+  async download(
+    @UuidParam() id: string,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<StreamableFile> {
     const { attachment, open } = await this.attachments.download(id);
-    const inline = inlineMediaTypes.includes(attachment.mediaType as AttachmentMediaType);
-    return new StreamableFile(await open(), {
-      type: attachment.mediaType,
-      length: attachment.size,
-      disposition: contentDisposition(attachment.originalName, {
-        type: inline ? 'inline' : 'attachment',
-      }),
-    });
+    return storedFileResponse(res, attachment, await open());
   }
 }

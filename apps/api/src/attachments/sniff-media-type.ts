@@ -1,13 +1,18 @@
 import { type AttachmentMediaType } from '@skyledger/contracts';
 import { parse } from 'csv-parse/sync';
-import { fileTypeFromFile } from 'file-type';
+import { fileTypeFromBuffer } from 'file-type';
 import { readFile } from 'node:fs/promises';
 import { extname } from 'node:path';
+import { findHiddenContent } from './hidden-content';
 
 /** What the bytes are, or why the desk refuses them. */
 export type SniffResult =
   | { accepted: true; mediaType: AttachmentMediaType }
-  | { accepted: false; reason: 'unsupportedType' | 'typeMismatch'; message: string };
+  | {
+      accepted: false;
+      reason: 'unsupportedType' | 'typeMismatch' | 'activeContent' | 'malformed';
+      message: string;
+    };
 
 const binaryTypes: Partial<Record<string, AttachmentMediaType>> = {
   'application/pdf': 'application/pdf',
@@ -33,10 +38,12 @@ const accepted = 'The desk takes PDF, PNG, JPEG, WebP, CSV and plain-text files'
  * Reads the type of an upload from its bytes, never from its name: the binary formats by
  * their signatures (file-type), text as strict UTF-8 without control characters, and CSV
  * as text whose first lines parse into records of one width. A name whose extension says
- * another accepted type is refused too: it is a file in disguise.
+ * another accepted type is refused too: it is a file in disguise; so is a file that carries
+ * markup, script or a second file besides what its type says (see hidden-content.ts).
  */
 export async function sniffMediaType(path: string, originalName: string): Promise<SniffResult> {
-  const detected = await fileTypeFromFile(path);
+  const bytes = await readFile(path);
+  const detected = await fileTypeFromBuffer(bytes);
   const extension = extname(originalName).toLowerCase();
   let mediaType: AttachmentMediaType | undefined;
   if (detected) {
@@ -49,7 +56,7 @@ export async function sniffMediaType(path: string, originalName: string): Promis
       };
     }
   } else {
-    const text = decodeText(await readFile(path));
+    const text = decodeText(bytes);
     if (text === null) {
       return {
         accepted: false,
@@ -66,6 +73,8 @@ export async function sniffMediaType(path: string, originalName: string): Promis
       message: `The name ends in ${extension} but the file is ${mediaType}: rename it or upload the real file.`,
     };
   }
+  const hidden = findHiddenContent(bytes, mediaType);
+  if (hidden) return { accepted: false, ...hidden };
   return { accepted: true, mediaType };
 }
 
@@ -93,14 +102,26 @@ function looksLikeCsv(text: string, namedCsv: boolean): boolean {
   }
 }
 
-/** The name to keep: any folders dropped, control characters removed, the right extension. */
+/**
+ * Characters that are never part of a name: C0 and C1 controls, line and paragraph
+ * separators, and the bidirectional controls that let `report\u202Egnp.exe` show as
+ * `reportexe.png` (Unicode Standard Annex #9, section 2, and Unicode Technical Report #36, 2.3).
+ */
+// eslint-disable-next-line no-control-regex
+const unsafeInNames = /[\u0000-\u001F\u007F-\u009F\u061C\u200E\u200F\u2028-\u202E\u2066-\u2069]/g;
+const NAME_MAX_CHARACTERS = 255;
+
+/** The name to keep: any folders dropped, unsafe characters removed, the right extension. */
 export function safeOriginalName(name: string, mediaType: AttachmentMediaType): string {
-  // eslint-disable-next-line no-control-regex
-  const base = (name.split(/[\\/]/).pop() ?? '').replace(/[\u0000-\u001F\u007F]/g, '').trim();
+  const base = (name.split(/[\\/]/).pop() ?? '').replace(unsafeInNames, '').trim();
   const extensions = extensionsOf[mediaType];
   const named = base === '' || base === '.' || base === '..' ? 'file' : base;
   const withExtension = extensions.includes(extname(named).toLowerCase())
     ? named
     : `${named}${extensions[0]}`;
-  return withExtension.length > 255 ? withExtension.slice(-255) : withExtension;
+  // Cut by characters, not UTF-16 units, so no character is split; the end keeps the extension.
+  const characters = Array.from(withExtension);
+  return characters.length > NAME_MAX_CHARACTERS
+    ? characters.slice(-NAME_MAX_CHARACTERS).join('')
+    : withExtension;
 }

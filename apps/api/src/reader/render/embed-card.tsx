@@ -1,4 +1,5 @@
 import { type ReaderExplainerSummary, type ReaderSite } from '@skyledger/contracts';
+import { createHash } from 'node:crypto';
 import { ratingPosition } from './format.js';
 import { renderDocument } from './page.js';
 
@@ -12,6 +13,9 @@ const cardStyle = `body{margin:0;font:15px/1.45 system-ui,-apple-system,'Segoe U
 main{border:1px solid #d6d2ca;border-left:6px solid #0a5a62;padding:12px 14px}
 p,h1{margin:0 0 6px}h1{font-size:15px;font-weight:400}.site{color:#4a525c;font-size:13px}.rating{font-size:17px}.tag{color:#8c1422;font-weight:700}
 a{color:#0a5a62;font-weight:600}a:focus-visible{outline:3px solid #1747c4;outline-offset:2px}`;
+
+/** The card's one style element as a CSP source (CSP Level 3, section 8.4), so no other may apply. */
+export const embedCardStyleSource = `'sha256-${createHash('sha256').update(cardStyle).digest('base64')}'`;
 
 function EmbedCard({ site, item }: EmbedCardInput) {
   const position = item.rating ? ratingPosition(item.rating) : null;
