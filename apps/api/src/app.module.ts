@@ -15,6 +15,7 @@ import { VerdictsModule } from './verdicts/verdicts.module';
 import { PublishingModule } from './publishing/publishing.module';
 import { ReaderModule } from './reader/reader.module';
 import { AuditModule } from './audit/audit.module';
+import { BenchModule } from './bench/bench.module';
 import { AppearancesModule } from './appearances/appearances.module';
 import { AuthModule } from './auth/auth.module';
 import { ClaimantsModule } from './claimants/claimants.module';
@@ -56,6 +57,11 @@ function webModules(): DynamicModule[] {
       exclude: ['/api/{*splat}', ...readerRoutePatterns.map((pattern) => `/${pattern}`)],
     }),
   ];
+}
+
+/** The benchmark's reference route (`npm run bench`), outside production only. */
+function benchModules(): Array<typeof BenchModule> {
+  return validateEnv(process.env).NODE_ENV === 'production' ? [] : [BenchModule];
 }
 
 /**
@@ -103,6 +109,7 @@ export class AppModule {
       imports: [
         ...coreImports(),
         ...webModules(),
+        ...benchModules(),
         AuditModule,
         MailModule,
         UsersModule,

@@ -5,8 +5,14 @@ describe('sign-in, sessions and lockout', () => {
   const editor = 'editor@auth.test';
 
   beforeAll(async () => {
-    // No grace: a replayed refresh token is treated as stolen at once.
-    t = await createTestApp('auth', { REFRESH_REUSE_GRACE_SECONDS: '0', LOCKOUT_THRESHOLD: '5' });
+    // No grace: a replayed refresh token is treated as stolen at once. The desk's zone and
+    // name are this suite's own, so the session and /api/me are seen to read them.
+    t = await createTestApp('auth', {
+      REFRESH_REUSE_GRACE_SECONDS: '0',
+      LOCKOUT_THRESHOLD: '5',
+      DESK_TIME_ZONE: 'Pacific/Auckland',
+      NEWSROOM_NAME: 'Auth Suite Courier',
+    });
     await t.addUser('science_editor', editor);
   });
   afterAll(() => t.close());
@@ -19,7 +25,13 @@ describe('sign-in, sessions and lockout', () => {
     expect(response.status).toBe(200);
     expect(response.body).toMatchObject({
       expiresIn: 900,
-      user: { email: editor, role: 'science_editor', status: 'active' },
+      user: {
+        email: editor,
+        role: 'science_editor',
+        status: 'active',
+        deskTimeZone: 'Pacific/Auckland',
+        newsroomName: 'Auth Suite Courier',
+      },
     });
     expect(typeof response.body.accessToken).toBe('string');
     const cookie = ([] as string[])
@@ -40,6 +52,8 @@ describe('sign-in, sessions and lockout', () => {
       displayName: 'editor',
       role: 'science_editor',
       status: 'active',
+      deskTimeZone: 'Pacific/Auckland',
+      newsroomName: 'Auth Suite Courier',
     });
   });
 

@@ -82,7 +82,11 @@ describe(`the claim queue at ${CLAIMS} generated claims: every common filter use
     service.queue(actor, claimQueueQuerySchema.parse(params));
 
   beforeAll(async () => {
-    t = await createTestApp('claim-queue-explain', { OUTBOX_WORKER_ENABLED: 'false' });
+    // No worker or scheduler: a query of theirs would be counted as the queue's.
+    t = await createTestApp('claim-queue-explain', {
+      OUTBOX_WORKER_ENABLED: 'false',
+      PUBLISHER_ENABLED: 'false',
+    });
     service = t.app.get(ClaimsService);
     const { written, seconds } = await generateDesk(t.dataSource, { claims: CLAIMS });
     expect(written.Claim).toBe(CLAIMS);
@@ -106,8 +110,9 @@ describe(`the claim queue at ${CLAIMS} generated claims: every common filter use
     );
     // A filter that matched nothing would prove nothing about its plan.
     expect(result.items.length).toBeGreaterThan(0);
-    // The page of ids, the counts per status, the rows of the page.
-    expect(queries).toHaveLength(3);
+    // The page, and the counts per status unless the same filters were counted a moment
+    // ago (claim-status-counts.ts): each filter's first case counts, so every plan is seen.
+    expect([1, 2]).toContain(queries.length);
 
     for (const query of queries) {
       const plan = await explain(t.dataSource, query);

@@ -28,6 +28,10 @@ export interface CurrentUser {
   displayName: string;
   role: Role;
   status: UserStatus;
+  /** The desk's time zone (IANA), in which the desk shows every date and time. */
+  deskTimeZone: string;
+  /** The newsroom the desk works for, as readers see it. */
+  newsroomName: string;
 }
 
 /** Body of a successful sign-in or refresh; the refresh token travels only in its cookie. */

@@ -60,6 +60,31 @@ export interface ChecklistItem {
   detail: string;
 }
 
+export const checklistItemLabels: Record<ChecklistItemKey, string> = {
+  verdictComplete: 'Rating, bottom line and explainer written',
+  primarySource: 'A primary source for the central finding',
+  rightOfReply: 'Right of reply logged or waived',
+  workingsRecomputed: 'Every working recomputed by the server',
+  legalReview: 'Legal-review flag cleared',
+};
+
+/** One item of the sign-off checklist, under its label. */
+export const checklistItem = (
+  key: ChecklistItemKey,
+  done: boolean,
+  detail: string,
+): ChecklistItem => ({ key, label: checklistItemLabels[key], done, detail });
+
+/** The legal-review item, for a claim flagged or not. */
+export const legalReviewItem = (flagged: boolean): ChecklistItem =>
+  checklistItem(
+    'legalReview',
+    !flagged,
+    flagged
+      ? 'Flagged for legal review: a desk chief clears the flag once the newsroom’s counsel has seen it'
+      : 'Not flagged',
+  );
+
 export interface SignoffDecisionView {
   id: string;
   versionId: string;

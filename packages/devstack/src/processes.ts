@@ -24,6 +24,24 @@ export function runStep(
   }
 }
 
+/** Runs a command with its output kept back unless it fails; returns what it printed. */
+export function runQuiet(
+  title: string,
+  command: string,
+  args: string[],
+  env: NodeJS.ProcessEnv,
+  cwd = repoRoot,
+): string {
+  const result = spawnSync(command, args, {
+    cwd,
+    env: { ...process.env, ...env },
+    encoding: 'utf8',
+  });
+  if (result.status !== 0)
+    throw new StepFailedError(`${title} failed:\n${result.stdout}\n${result.stderr}`);
+  return result.stdout;
+}
+
 /** Runs a command and reports its exit code instead of throwing. */
 export function runCounted(
   command: string,

@@ -34,19 +34,24 @@ export function databaseAccess(): DatabaseAccess {
   };
 }
 
-/** A database of the suite's own on the private instance, dropped when the suite ends. */
+/**
+ * A database of the suite's own on the private instance, dropped when the suite ends.
+ * The benchmark makes its own under the `skyledger_bench` prefix, which the app user may
+ * also create (mariadb.ts).
+ */
 export class TestDatabase {
   readonly name: string;
 
   constructor(
     suite: string,
     readonly access: DatabaseAccess = databaseAccess(),
+    prefix = 'skyledger_test',
   ) {
     const slug = suite
       .toLowerCase()
       .replace(/[^a-z0-9]+/g, '_')
       .slice(0, 30);
-    this.name = `skyledger_test_${slug}_${randomBytes(4).toString('hex')}`;
+    this.name = `${prefix}_${slug}_${randomBytes(4).toString('hex')}`;
   }
 
   async create(): Promise<void> {

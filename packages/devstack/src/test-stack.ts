@@ -1,4 +1,3 @@
-import { spawnSync } from 'node:child_process';
 import { rm } from 'node:fs/promises';
 import { join } from 'node:path';
 import { apiDir, migrationArgs, startApi } from './api-server.js';
@@ -6,7 +5,7 @@ import { appEnv } from './app-env.js';
 import { freePort } from './free-port.js';
 import { startMailCatcher } from './mail-catcher.js';
 import { repoRoot, tmpDir } from './paths.js';
-import { stopService, StepFailedError } from './processes.js';
+import { runQuiet, stopService } from './processes.js';
 import { TestDatabase } from './test-database.js';
 
 export interface TestStack {
@@ -15,22 +14,6 @@ export interface TestStack {
   /** MailDev's REST API root, e.g. http://127.0.0.1:41235/api */
   mailApiUrl: string;
   stop(): Promise<void>;
-}
-
-function run(
-  title: string,
-  command: string,
-  args: string[],
-  env: Record<string, string>,
-  cwd = repoRoot,
-): void {
-  const result = spawnSync(command, args, {
-    cwd,
-    env: { ...process.env, ...env },
-    encoding: 'utf8',
-  });
-  if (result.status !== 0)
-    throw new StepFailedError(`${title} failed:\n${result.stdout}\n${result.stderr}`);
 }
 
 /**
@@ -57,8 +40,8 @@ export async function startTestStack(name: string): Promise<TestStack> {
     () => rm(filesDir, { recursive: true, force: true }),
   ];
   try {
-    run('migrations', process.execPath, migrationArgs(), env, apiDir);
-    run(
+    runQuiet('migrations', process.execPath, migrationArgs(), env, apiDir);
+    runQuiet(
       'the demo seed',
       process.execPath,
       [join(repoRoot, 'node_modules/tsx/dist/cli.mjs'), join(repoRoot, 'seeds-demo/src/run.ts')],

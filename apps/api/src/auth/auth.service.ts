@@ -190,7 +190,7 @@ export class AuthService {
     return {
       accessToken: this.jwt.sign(payload),
       expiresIn: this.config.accessTtlSeconds,
-      user: toCurrentUser({ ...user, status: 'active' }),
+      user: toCurrentUser({ ...user, status: 'active' }, this.app),
     };
   }
 

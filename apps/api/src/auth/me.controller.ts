@@ -1,10 +1,11 @@
-import { Body, Controller, Get, Put } from '@nestjs/common';
+import { Body, Controller, Get, Inject, Put } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import {
   type CurrentUser as CurrentUserBody,
   type NotificationSettingsView,
 } from '@skyledger/contracts';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { appConfig, type AppConfig } from '../config/configuration';
 import { UpdateNotificationSettingsDto } from '../users/dto/update-notification-settings.dto';
 import { NotificationSettingsService } from '../users/notification-settings.service';
 import { UsersService } from '../users/users.service';
@@ -18,11 +19,13 @@ export class MeController {
   constructor(
     private readonly users: UsersService,
     private readonly notifications: NotificationSettingsService,
+    @Inject(appConfig.KEY) private readonly app: AppConfig,
   ) {}
 
+  /** Who I am, and the desk's time zone and name that my screens use. */
   @Get()
   async me(@CurrentUser() user: AuthenticatedUser): Promise<CurrentUserBody> {
-    return toCurrentUser(await this.users.findById(user.id));
+    return toCurrentUser(await this.users.findById(user.id), this.app);
   }
 
   /** Which notification mails I get. */

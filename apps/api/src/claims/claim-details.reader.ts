@@ -26,7 +26,9 @@ export class ClaimDetailsReader {
 
   async read(id: string): Promise<ClaimDetail> {
     const manager = this.dataSource.manager;
-    const claim = await manager.findOne(Claim, {
+    // find, not findOne: with a limit and its topics joined, TypeORM first selects the
+    // distinct ids in a query of their own, a round trip the primary key makes useless.
+    const [claim] = await manager.find(Claim, {
       where: { id },
       relations: { claimant: true, assignee: true, filedBy: true, topics: true },
     });

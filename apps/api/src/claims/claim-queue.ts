@@ -1,14 +1,21 @@
-import { CLAIM_PAGE_SIZE_DEFAULT, type ClaimSortField } from '@skyledger/contracts';
+import {
+  CLAIM_PAGE_SIZE_DEFAULT,
+  type ClaimantKind,
+  type ClaimListItem,
+  type ClaimSortField,
+  type ClaimStatus,
+} from '@skyledger/contracts';
 import { type Repository, type SelectQueryBuilder } from 'typeorm';
 import { type AuthenticatedUser } from '../auth/authenticated-user';
+import { toClaimListItem } from './claim-views';
 import { type ClaimQueueQueryDto } from './dto/claim-queue-query.dto';
 import { Claim } from './entities/claim.entity';
 
-const sortColumns: Record<ClaimSortField, string> = {
-  filedAt: 'claim.createdAt',
-  updatedAt: 'claim.updatedAt',
-  status: 'claim.status',
-  summary: 'claim.summary',
+const sortColumns: Record<ClaimSortField, keyof Claim> = {
+  filedAt: 'createdAt',
+  updatedAt: 'updatedAt',
+  status: 'status',
+  summary: 'summary',
 };
 
 /** The day after a `YYYY-MM-DD` date, so `filedTo` includes the whole of its day. */
@@ -51,20 +58,92 @@ export function filteredClaims(
   return builder;
 }
 
-/** One page of the queue, sorted, ids only: the rows are loaded with their relations after. */
+/** A row of the queue as its one query reads it: the claim, its claimant, people and topics. */
+export interface QueueRow {
+  id: string;
+  summary: string;
+  status: ClaimStatus;
+  legalReview: number | boolean;
+  createdAt: Date;
+  updatedAt: Date;
+  claimantId: string;
+  claimantName: string;
+  claimantKind: ClaimantKind;
+  assigneeId: string | null;
+  assigneeName: string | null;
+  filedById: string;
+  filedByName: string;
+  /** Space-separated (topics have no spaces). */
+  topics: string | null;
+}
+
+/** The sort and its tie-breaks, run the same way so an index can be read in one direction. */
+function sorted<T extends SelectQueryBuilder<Claim>>(
+  builder: T,
+  query: ClaimQueueQueryDto,
+  alias: string,
+): T {
+  const order = query.order === 'asc' ? 'ASC' : 'DESC';
+  builder.orderBy(`${alias}.${sortColumns[query.sort ?? 'filedAt']}`, order);
+  if (query.sort && query.sort !== 'filedAt') builder.addOrderBy(`${alias}.createdAt`, order);
+  return builder.addOrderBy(`${alias}.id`, order);
+}
+
+/**
+ * One page of the queue, sorted, in one query with just the columns a row shows. The
+ * page's ids are picked first in a derived table (filters, sort and offset on the claims
+ * indexes, nothing else read), and only those 25 claims are joined to their claimant,
+ * people and topics. Loading the page as entities with their relations cost more than
+ * all the rest of a queue request, and joining before paging read the joined columns of
+ * every claim the filters matched (npm run bench).
+ */
 export function queuePage(
   claims: Repository<Claim>,
   query: ClaimQueueQueryDto,
   actor: AuthenticatedUser,
 ): SelectQueryBuilder<Claim> {
   const pageSize = query.pageSize ?? CLAIM_PAGE_SIZE_DEFAULT;
-  const order = query.order === 'asc' ? 'ASC' : 'DESC';
-  const builder = filteredClaims(claims, query, actor)
-    .select('claim.id', 'id')
-    .orderBy(sortColumns[query.sort ?? 'filedAt'], order)
+  const ids = sorted(filteredClaims(claims, query, actor).select('claim.id', 'id'), query, 'claim')
     .offset(((query.page ?? 1) - 1) * pageSize)
     .limit(pageSize);
-  // Tie-breaks run the same way as the sort, so the index can be read in one direction.
-  if (query.sort && query.sort !== 'filedAt') builder.addOrderBy('claim.createdAt', order);
-  return builder.addOrderBy('claim.id', order);
+  const builder = claims
+    .createQueryBuilder('claim')
+    .innerJoin(`(${ids.getQuery()})`, 'page', 'page.id = claim.id')
+    .setParameters(ids.getParameters())
+    .innerJoin('claim.claimant', 'claimant')
+    .innerJoin('claim.filedBy', 'filedBy')
+    .leftJoin('claim.assignee', 'assignee')
+    .select('claim.id', 'id')
+    .addSelect('claim.summary', 'summary')
+    .addSelect('claim.status', 'status')
+    .addSelect('claim.legalReview', 'legalReview')
+    .addSelect('claim.createdAt', 'createdAt')
+    .addSelect('claim.updatedAt', 'updatedAt')
+    .addSelect('claimant.id', 'claimantId')
+    .addSelect('claimant.name', 'claimantName')
+    .addSelect('claimant.kind', 'claimantKind')
+    .addSelect('assignee.id', 'assigneeId')
+    .addSelect('assignee.displayName', 'assigneeName')
+    .addSelect('filedBy.id', 'filedById')
+    .addSelect('filedBy.displayName', 'filedByName')
+    .addSelect(
+      "(SELECT GROUP_CONCAT(t.topic SEPARATOR ' ') FROM claim_topics t WHERE t.claim_id = claim.id)",
+      'topics',
+    );
+  return sorted(builder, query, 'claim');
+}
+
+export function toQueueItem(row: QueueRow): ClaimListItem {
+  return toClaimListItem({
+    id: row.id,
+    summary: row.summary,
+    status: row.status,
+    legalReview: Boolean(Number(row.legalReview)),
+    createdAt: row.createdAt,
+    updatedAt: row.updatedAt,
+    topics: (row.topics ? row.topics.split(' ') : []).map((topic) => ({ topic })),
+    claimant: { id: row.claimantId, name: row.claimantName, kind: row.claimantKind },
+    assignee: row.assigneeId ? { id: row.assigneeId, displayName: row.assigneeName! } : null,
+    filedBy: { id: row.filedById, displayName: row.filedByName },
+  });
 }

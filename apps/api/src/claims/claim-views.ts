@@ -2,10 +2,23 @@ import { type ClaimHistoryEvent, type ClaimListItem } from '@skyledger/contracts
 import { type AuditEvent } from '../audit/entities/audit-event.entity';
 import { toPersonRef } from '../common/views/person-ref';
 import { type User } from '../users/entities/user.entity';
+import { type Claimant } from '../claimants/entities/claimant.entity';
+import { type ClaimTopic } from './entities/claim-topic.entity';
 import { type Claim } from './entities/claim.entity';
 
+/** What a list item shows of a claim: the entity with these relations, or a queue row. */
+export type ListedClaim = Pick<
+  Claim,
+  'id' | 'summary' | 'status' | 'legalReview' | 'createdAt' | 'updatedAt'
+> & {
+  topics: Array<Pick<ClaimTopic, 'topic'>>;
+  claimant: Pick<Claimant, 'id' | 'name' | 'kind'>;
+  assignee: Pick<User, 'id' | 'displayName'> | null;
+  filedBy: Pick<User, 'id' | 'displayName'>;
+};
+
 /** Needs `claimant`, `assignee`, `filedBy` and `topics` loaded. */
-export function toClaimListItem(claim: Claim): ClaimListItem {
+export function toClaimListItem(claim: ListedClaim): ClaimListItem {
   return {
     id: claim.id,
     summary: claim.summary,

@@ -6,6 +6,7 @@ import { ClaimantsModule } from '../claimants/claimants.module';
 import { MailModule } from '../mail/mail.module';
 import { ClaimAssignmentService } from './claim-assignment.service';
 import { ClaimDetailsReader } from './claim-details.reader';
+import { ClaimStatusCounts } from './claim-status-counts';
 import { ClaimPartsService } from './claim-parts.service';
 import { ClaimsController } from './claims.controller';
 import { ClaimsService } from './claims.service';
@@ -20,7 +21,13 @@ import { Claim } from './entities/claim.entity';
     ClaimantsModule,
   ],
   controllers: [ClaimsController],
-  providers: [ClaimsService, ClaimDetailsReader, ClaimAssignmentService, ClaimPartsService],
+  providers: [
+    ClaimsService,
+    ClaimDetailsReader,
+    ClaimStatusCounts,
+    ClaimAssignmentService,
+    ClaimPartsService,
+  ],
   exports: [ClaimsService, ClaimPartsService],
 })
 export class ClaimsModule {}

@@ -2,11 +2,9 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import {
   CLAIM_PAGE_SIZE_DEFAULT,
-  claimStatuses,
   type ClaimDetail,
   type ClaimHistoryEvent,
   type ClaimQueueResponse,
-  type ClaimStatus,
   type Role,
 } from '@skyledger/contracts';
 import { DataSource, In, Repository, type EntityManager } from 'typeorm';
@@ -21,10 +19,11 @@ import { assertExactlyOne } from '../common/validation/exactly-one';
 import { SearchIndexService } from '../search/search-index.service';
 import { User } from '../users/entities/user.entity';
 import { ClaimDetailsReader } from './claim-details.reader';
+import { ClaimStatusCounts } from './claim-status-counts';
 import { claimNotFound } from './claim-not-found';
 import { assertMayEditClaim, claimRoles, forbidden, hasRole } from './claim-policy';
-import { filteredClaims, queuePage } from './claim-queue';
-import { toClaimHistoryEvent, toClaimListItem } from './claim-views';
+import { queuePage, toQueueItem, type QueueRow } from './claim-queue';
+import { toClaimHistoryEvent } from './claim-views';
 import { type CreateClaimDto } from './dto/create-claim.dto';
 import { type ClaimQueueQueryDto } from './dto/claim-queue-query.dto';
 import { type UpdateClaimDto } from './dto/update-claim.dto';
@@ -40,6 +39,7 @@ export class ClaimsService {
     private readonly claimants: ClaimantsService,
     private readonly details: ClaimDetailsReader,
     private readonly searchIndex: SearchIndexService,
+    private readonly statusCounts: ClaimStatusCounts,
   ) {}
 
   async file(actor: AuthenticatedUser, dto: CreateClaimDto): Promise<ClaimDetail> {
@@ -101,34 +101,14 @@ export class ClaimsService {
   async queue(actor: AuthenticatedUser, query: ClaimQueueQueryDto): Promise<ClaimQueueResponse> {
     const pageSize = query.pageSize ?? CLAIM_PAGE_SIZE_DEFAULT;
     const page = query.page ?? 1;
-    const [ids, statusRows] = await Promise.all([
-      queuePage(this.claims, query, actor).getRawMany<{ id: string }>(),
-      filteredClaims(this.claims, query, actor, { status: false })
-        .select('claim.status', 'status')
-        .addSelect('COUNT(*)', 'count')
-        .groupBy('claim.status')
-        .getRawMany<{ status: ClaimStatus; count: string }>(),
+    const [rows, counts] = await Promise.all([
+      queuePage(this.claims, query, actor).getRawMany<QueueRow>(),
+      this.statusCounts.counts(query, actor),
     ]);
-    const counts = Object.fromEntries(claimStatuses.map((status) => [status, 0])) as Record<
-      ClaimStatus,
-      number
-    >;
-    for (const row of statusRows) counts[row.status] = Number(row.count);
     const total = query.status
       ? counts[query.status]
       : Object.values(counts).reduce((sum, count) => sum + count, 0);
-
-    const rows = ids.length
-      ? await this.claims.find({
-          where: { id: In(ids.map((row) => row.id)) },
-          relations: { claimant: true, assignee: true, filedBy: true, topics: true },
-        })
-      : [];
-    const byId = new Map(rows.map((claim) => [claim.id, claim]));
-    const items = ids.flatMap((row) => {
-      const claim = byId.get(row.id);
-      return claim ? [toClaimListItem(claim)] : [];
-    });
+    const items = rows.map(toQueueItem);
     return { items, total, page, pageSize, counts };
   }
 

@@ -12,15 +12,11 @@ import {
   StreamableFile,
 } from '@nestjs/common';
 import { ApiExcludeController } from '@nestjs/swagger';
-import {
-  inlineMediaTypes,
-  readerSubscriptionSchema,
-  type AttachmentMediaType,
-} from '@skyledger/contracts';
-import { create as contentDisposition } from 'content-disposition';
+import { readerSubscriptionSchema } from '@skyledger/contracts';
 import { type Response } from 'express';
 import { DataSource } from 'typeorm';
 import { InjectDataSource } from '@nestjs/typeorm';
+import { storedFileResponse } from '../attachments/stored-file-response';
 import { Claim } from '../claims/entities/claim.entity';
 import { Public } from '../common/decorators/public.decorator';
 import { ApiError } from '../common/errors/api-error';
@@ -28,6 +24,7 @@ import { ReaderSubscriptionsService } from '../publishing/reader-subscriptions.s
 import { SearchService } from '../search/search.service';
 import { FILE_STORAGE, type FileStorage } from '../storage/file-storage';
 import { explainersAtomFeed } from './atom-feed';
+import { embedCardPolicy } from './reader-policy';
 import { claimReviewJsonLd, shareMeta } from './claim-review';
 import {
   readerStylesheet,
@@ -39,6 +36,7 @@ import {
   renderMethodologyPage,
   type SubscriptionResult,
 } from './render';
+import { ReaderPageCache } from './reader-page-cache';
 import { READER_PAGE_SIZE, ReaderService } from './reader.service';
 
 /**
@@ -72,6 +70,7 @@ export class ReaderController {
     private readonly subscriptions: ReaderSubscriptionsService,
     @InjectDataSource() private readonly dataSource: DataSource,
     @Inject(FILE_STORAGE) private readonly storage: FileStorage,
+    private readonly pages: ReaderPageCache,
   ) {}
 
   @Get('explainers')
@@ -82,6 +81,16 @@ export class ReaderController {
     const topic = one(query.topic);
     const rating = one(query.rating);
     const page = Math.max(1, Math.min(500, Number.parseInt(one(query.page) ?? '1', 10) || 1));
+    const key = `index ${JSON.stringify([q, topic, rating, page])}`;
+    return (await this.pages.page(key, () => this.indexPage(q, topic, rating, page)))!;
+  }
+
+  private async indexPage(
+    q: string | undefined,
+    topic: string | undefined,
+    rating: string | undefined,
+    page: number,
+  ): Promise<string> {
     let listed: Awaited<ReturnType<ReaderService['list']>>;
     if (q) {
       const found = await this.search.reader({ q: q.slice(0, 200), page, topic, rating });
@@ -177,10 +186,7 @@ export class ReaderController {
       return this.message(res, HttpStatus.NOT_FOUND, 'Not found', 'No such explainer.');
     const [summary] = (await this.reader.list({ claimIds: [await this.claimIdOf(slug)] })).items;
     res.removeHeader('X-Frame-Options');
-    res.setHeader(
-      'Content-Security-Policy',
-      "default-src 'none'; style-src 'unsafe-inline'; frame-ancestors *; base-uri 'none'; form-action 'none'",
-    );
+    res.setHeader('Content-Security-Policy', embedCardPolicy);
     res.setHeader('Cache-Control', PAGE_CACHE);
     res.type('html');
     return renderEmbedCard({ site: this.reader.site(), item: summary! });
@@ -199,14 +205,7 @@ export class ReaderController {
     if (!attachment) throw new ApiError(HttpStatus.NOT_FOUND, 'No such capture');
     res.setHeader('X-Robots-Tag', 'noindex, nofollow');
     res.setHeader('Cache-Control', 'public, max-age=3600');
-    const inline = inlineMediaTypes.includes(attachment.mediaType as AttachmentMediaType);
-    return new StreamableFile(await this.storage.open(attachment.storageKey), {
-      type: attachment.mediaType,
-      length: attachment.size,
-      disposition: contentDisposition(attachment.originalName, {
-        type: inline ? 'inline' : 'attachment',
-      }),
-    });
+    return storedFileResponse(res, attachment, await this.storage.open(attachment.storageKey));
   }
 
   @Get('corrections')
@@ -233,8 +232,11 @@ export class ReaderController {
   @Header('Content-Type', 'application/atom+xml; charset=utf-8')
   @Header('Cache-Control', PAGE_CACHE)
   async feed(): Promise<string> {
-    const { items } = await this.reader.list({ page: 1, pageSize: 100 });
-    return explainersAtomFeed(this.reader.site(), items);
+    const feed = await this.pages.page('feed', async () => {
+      const { items } = await this.reader.list({ page: 1, pageSize: 100 });
+      return explainersAtomFeed(this.reader.site(), items);
+    });
+    return feed!;
   }
 
   /** oEmbed 1.0 (https://oembed.com): a rich card for an explainer's address, JSON only. */
@@ -290,8 +292,23 @@ export class ReaderController {
     sequence: number | undefined,
     subscription?: SubscriptionResult,
   ): Promise<string> {
-    const explainer = await this.reader.explainer(slug, sequence);
-    if (!explainer) {
+    const render = async () => {
+      const explainer = await this.reader.explainer(slug, sequence);
+      if (!explainer) return null;
+      const site = this.reader.site();
+      return renderExplainerPage({
+        site,
+        explainer,
+        jsonLd: claimReviewJsonLd(site, explainer),
+        share: shareMeta(explainer),
+        ...(subscription ? { subscription } : {}),
+      });
+    };
+    // A page that answers a reader's subscription is that reader's alone: never kept.
+    const html = subscription
+      ? await render()
+      : await this.pages.page(`explainer ${slug} ${sequence ?? 'latest'}`, render);
+    if (html === null) {
       return this.message(
         res,
         HttpStatus.NOT_FOUND,
@@ -299,17 +316,10 @@ export class ReaderController {
         'There is no published explainer at this address.',
       );
     }
-    const site = this.reader.site();
     res.type('html');
     if (!subscription) res.setHeader('Cache-Control', PAGE_CACHE);
     if (subscription?.status === 'invalid') res.status(HttpStatus.BAD_REQUEST);
-    return renderExplainerPage({
-      site,
-      explainer,
-      jsonLd: claimReviewJsonLd(site, explainer),
-      share: shareMeta(explainer),
-      ...(subscription ? { subscription } : {}),
-    });
+    return html;
   }
 
   private async unsubscribe(token: unknown, res: Response): Promise<string> {

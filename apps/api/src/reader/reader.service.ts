@@ -13,7 +13,7 @@ import {
   type ReaderUpdateNote,
 } from '@skyledger/contracts';
 import { citedSourceIds, embeddedWorkingIds } from '@skyledger/explainer';
-import { DataSource, In } from 'typeorm';
+import { DataSource, In, LessThanOrEqual } from 'typeorm';
 import { Appearance } from '../appearances/entities/appearance.entity';
 import { Attachment } from '../attachments/entities/attachment.entity';
 import { type Claimant } from '../claimants/entities/claimant.entity';
@@ -142,7 +142,10 @@ export class ReaderService {
 
   /**
    * Published explainers, newest first (or in the order of `claimIds` when given, as
-   * search ranked them), optionally of a topic or a rating.
+   * search ranked them), optionally of a topic or a rating. A claim whose first
+   * publication is due is published, so the page is read off the claims' index on
+   * `first_published_at`; then only its twenty explainers' publications are read, and of
+   * their versions only what the index shows (not their bodies).
    */
   async list(options: {
     claimIds?: string[];
@@ -151,63 +154,82 @@ export class ReaderService {
     page?: number;
     pageSize?: number;
   }): Promise<{ items: ReaderExplainerSummary[]; total: number }> {
+    if (options.claimIds?.length === 0) return { items: [], total: 0 };
     const query = this.dataSource
-      .getRepository(Publication)
-      .createQueryBuilder('p')
-      .innerJoinAndSelect('p.claim', 'claim')
-      .innerJoinAndSelect('claim.claimant', 'claimant')
-      .leftJoinAndSelect('claim.topics', 'topic')
-      .innerJoinAndSelect('p.verdictVersion', 'version')
-      .where("p.state = 'published' AND p.published_at <= NOW(3)")
-      .andWhere(
-        "NOT EXISTS (SELECT 1 FROM publications later WHERE later.claim_id = p.claim_id AND later.state = 'published' AND later.published_at <= NOW(3) AND later.sequence > p.sequence)",
-      );
-    if (options.claimIds) {
-      if (options.claimIds.length === 0) return { items: [], total: 0 };
-      query.andWhere('p.claim_id IN (:...ids)', { ids: options.claimIds });
-    }
+      .getRepository(Claim)
+      .createQueryBuilder('claim')
+      .where('claim.first_published_at <= NOW(3)');
+    if (options.claimIds) query.andWhere('claim.id IN (:...ids)', { ids: options.claimIds });
     if (options.topic) {
       query.andWhere(
-        'EXISTS (SELECT 1 FROM claim_topics t WHERE t.claim_id = p.claim_id AND t.topic = :topic)',
+        'EXISTS (SELECT 1 FROM claim_topics t WHERE t.claim_id = claim.id AND t.topic = :topic)',
         { topic: options.topic },
       );
     }
-    if (options.rating) query.andWhere('version.rating_id = :rating', { rating: options.rating });
+    if (options.rating) {
+      query.andWhere(
+        `(SELECT v.rating_id FROM publications p JOIN verdict_versions v ON v.id = p.version_id
+           WHERE p.claim_id = claim.id AND p.state = 'published' AND p.published_at <= NOW(3)
+           ORDER BY p.sequence DESC LIMIT 1) = :rating`,
+        { rating: options.rating },
+      );
+    }
     const page = options.claimIds ? 1 : (options.page ?? 1);
     const pageSize = options.pageSize ?? READER_PAGE_SIZE;
-    const [found, total] = await query
-      .orderBy('claim.first_published_at', 'DESC')
-      .addOrderBy('claim.id', 'ASC')
-      .skip((page - 1) * pageSize)
-      .take(pageSize)
-      .getManyAndCount();
+    const [rows, total] = await Promise.all([
+      query
+        .clone()
+        .select('claim.id', 'id')
+        .orderBy('claim.first_published_at', 'DESC')
+        .addOrderBy('claim.id', 'ASC')
+        .offset((page - 1) * pageSize)
+        .limit(pageSize)
+        .getRawMany<{ id: string }>(),
+      query.getCount(),
+    ]);
     const rank = (claimId: string) => options.claimIds?.indexOf(claimId) ?? 0;
-    const publications = options.claimIds
-      ? found.sort((a, b) => rank(a.claimId) - rank(b.claimId))
-      : found;
-    const claimIds = publications.map((p) => p.claimId);
-    const history = claimIds.length
-      ? await this.dataSource.manager.find(Publication, {
-          where: { claimId: In(claimIds), state: 'published' },
-          order: { sequence: 'ASC' },
-        })
-      : [];
-    const ratings = await this.ratings();
-    const items = publications.map((p) => {
-      const mine = history.filter((h) => h.claimId === p.claimId && h.publishedAt! <= new Date());
-      const noted = mine.filter((h) => h.noteKind);
-      return {
-        slug: p.claim.slug!,
-        url: explainerUrl(this.app.appUrl, p.claim.slug!),
-        summary: p.claim.summary,
-        claimantDisplayName: claimantForReaders(p.claim.claimant).displayName,
-        rating: ratings.find((rating) => rating.id === p.verdictVersion.ratingId) ?? null,
-        bottomLine: p.verdictVersion.bottomLine,
-        topics: p.claim.topics.map((topic) => topic.topic).sort(),
-        firstPublishedAt: (mine[0] ?? p).publishedAt!.toISOString(),
-        modifiedAt: noted[noted.length - 1]?.publishedAt!.toISOString() ?? null,
-        retracted: mine.some((h) => h.noteKind === 'retraction'),
-      };
+    const ids = rows.map((row) => row.id).sort((a, b) => rank(a) - rank(b));
+    if (ids.length === 0) return { items: [], total };
+    const [claims, history, ratings] = await Promise.all([
+      this.dataSource.manager.find(Claim, {
+        where: { id: In(ids) },
+        relations: { claimant: true, topics: true },
+      }),
+      this.dataSource.manager.find(Publication, {
+        where: { claimId: In(ids), state: 'published', publishedAt: LessThanOrEqual(new Date()) },
+        relations: { verdictVersion: true },
+        select: {
+          id: true,
+          claimId: true,
+          sequence: true,
+          publishedAt: true,
+          noteKind: true,
+          verdictVersion: { id: true, ratingId: true, bottomLine: true },
+        },
+        order: { sequence: 'ASC' },
+      }),
+      this.ratings(),
+    ]);
+    const items = ids.flatMap((id) => {
+      const claim = claims.find((candidate) => candidate.id === id);
+      const mine = history.filter((publication) => publication.claimId === id);
+      const latest = mine[mine.length - 1];
+      if (!claim?.slug || !latest) return [];
+      const noted = mine.filter((publication) => publication.noteKind);
+      return [
+        {
+          slug: claim.slug,
+          url: explainerUrl(this.app.appUrl, claim.slug),
+          summary: claim.summary,
+          claimantDisplayName: claimantForReaders(claim.claimant).displayName,
+          rating: ratings.find((rating) => rating.id === latest.verdictVersion.ratingId) ?? null,
+          bottomLine: latest.verdictVersion.bottomLine,
+          topics: claim.topics.map((topic) => topic.topic).sort(),
+          firstPublishedAt: mine[0]!.publishedAt!.toISOString(),
+          modifiedAt: noted[noted.length - 1]?.publishedAt!.toISOString() ?? null,
+          retracted: mine.some((publication) => publication.noteKind === 'retraction'),
+        },
+      ];
     });
     return { items, total };
   }
@@ -215,9 +237,9 @@ export class ReaderService {
   /** The topics of published explainers, for the index's filter. */
   async topics(): Promise<string[]> {
     const rows = await this.dataSource.query<Array<{ topic: string }>>(
-      `SELECT DISTINCT t.topic FROM claim_topics t
-         JOIN publications p ON p.claim_id = t.claim_id
-        WHERE p.state = 'published' AND p.published_at <= NOW(3)
+      `SELECT DISTINCT t.topic FROM claims c
+         JOIN claim_topics t ON t.claim_id = c.id
+        WHERE c.first_published_at <= NOW(3)
         ORDER BY t.topic`,
     );
     return rows.map((row) => row.topic);

@@ -1,4 +1,6 @@
 import {
+  checklistItem,
+  legalReviewItem,
   reliabilityGradeLabels,
   replyChannelLabels,
   type ChecklistItem,
@@ -15,19 +17,11 @@ import { runCalculation } from '../workings/run-calculation';
 import { outputDifferences } from '../workings/workings.service';
 import { type VerdictVersion } from './entities/verdict-version.entity';
 
-const item = (key: ChecklistItem['key'], label: string, done: boolean, detail: string) => ({
-  key,
-  label,
-  done,
-  detail,
-});
-
 /** Whether the claim's workings give today what they gave when saved, recomputed now. */
 async function workingsItem(manager: EntityManager, claimId: string): Promise<ChecklistItem> {
-  const label = 'Every working recomputed by the server';
   const workings = await manager.find(Working, { where: { claimId }, order: { createdAt: 'ASC' } });
   if (workings.length === 0)
-    return item('workingsRecomputed', label, true, 'No workings on this claim');
+    return checklistItem('workingsRecomputed', true, 'No workings on this claim');
   const differing: string[] = [];
   for (const working of workings) {
     try {
@@ -41,15 +35,13 @@ async function workingsItem(manager: EntityManager, claimId: string): Promise<Ch
     }
   }
   return differing.length
-    ? item(
+    ? checklistItem(
         'workingsRecomputed',
-        label,
         false,
         `Recomputed now, ${differing.length} of ${workings.length} differ (${differing.join(', ')}): re-run them and check the explainer`,
       )
-    : item(
+    : checklistItem(
         'workingsRecomputed',
-        label,
         true,
         `All ${workings.length} recomputed now and unchanged`,
       );
@@ -88,25 +80,22 @@ export async function signoffChecklist(
   const latest = attempts[0];
 
   return [
-    item(
+    checklistItem(
       'verdictComplete',
-      'Rating, bottom line and explainer written',
       complete,
       complete
         ? 'All three are there'
         : 'The verdict needs a rating, a bottom line and an explainer',
     ),
-    item(
+    checklistItem(
       'primarySource',
-      'A primary source for the central finding',
       primaryDone,
       primary
         ? `${primary.source.title} (${reliabilityGradeLabels[primary.source.grade].toLowerCase()})${primaryDone ? '' : ': grade it strong or adequate, or choose another'}`
         : 'Choose the source that backs the central finding',
     ),
-    item(
+    checklistItem(
       'rightOfReply',
-      'Right of reply logged or waived',
       latest !== undefined || claim.replyWaiverReason !== null,
       latest
         ? `${attempts.length} attempt${attempts.length === 1 ? '' : 's'} logged, the latest to ${latest.contacted} (${replyChannelLabels[latest.channel].toLowerCase()})`
@@ -115,13 +104,6 @@ export async function signoffChecklist(
           : 'Log an attempt to reach the claimant, or ask a desk chief to waive it with a reason',
     ),
     await workingsItem(manager, claim.id),
-    item(
-      'legalReview',
-      'Legal-review flag cleared',
-      !claim.legalReview,
-      claim.legalReview
-        ? 'Flagged for legal review: a desk chief clears the flag once the newsroom’s counsel has seen it'
-        : 'Not flagged',
-    ),
+    legalReviewItem(claim.legalReview),
   ];
 }

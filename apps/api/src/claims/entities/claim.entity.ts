@@ -29,10 +29,13 @@ import { ClaimTopic } from './claim-topic.entity';
 @Index('IDX_claims_updated_at', ['updatedAt', 'createdAt'])
 @Index('IDX_claims_summary', ['summary', 'createdAt'])
 @Index('IDX_claims_status', ['status', 'createdAt'])
+@Index('IDX_claims_status_updated_at', ['status', 'updatedAt', 'createdAt'])
+@Index('IDX_claims_status_summary', ['status', 'summary', 'createdAt'])
 @Index('IDX_claims_assignee', ['assigneeId', 'status', 'createdAt'])
 @Index('IDX_claims_filed_by', ['filedById', 'status', 'createdAt'])
 @Index('IDX_claims_claimant', ['claimantId', 'createdAt'])
 @Index('IDX_claims_legal', ['legalReview', 'status', 'createdAt'])
+@Index('IDX_claims_first_published', ['firstPublishedAt'])
 export class Claim {
   @PrimaryGeneratedColumn('uuid')
   id: string;

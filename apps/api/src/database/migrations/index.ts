@@ -4,6 +4,7 @@ import { QueueSortIndexes1796219054468 } from './1796219054468-QueueSortIndexes'
 import { WorkingsAndDatasets1796219107240 } from './1796219107240-WorkingsAndDatasets';
 import { Verdicts1796220519301 } from './1796220519301-Verdicts';
 import { Publishing1796221845244 } from './1796221845244-Publishing';
+import { QueueAndReaderIndexes1796227840239 } from './1796227840239-QueueAndReaderIndexes';
 
 /** Every migration in order, listed by class so the same list works from dist/ and under Jest. */
 export const migrations = [
@@ -13,4 +14,5 @@ export const migrations = [
   WorkingsAndDatasets1796219107240,
   Verdicts1796220519301,
   Publishing1796221845244,
+  QueueAndReaderIndexes1796227840239,
 ];

@@ -1,5 +1,5 @@
 export { renderCorrectionsPage, type CorrectionsPageInput } from './corrections-page.js';
-export { renderEmbedCard, type EmbedCardInput } from './embed-card.js';
+export { embedCardStyleSource, renderEmbedCard, type EmbedCardInput } from './embed-card.js';
 export {
   renderExplainerPage,
   type ExplainerPageInput,
