@@ -3,8 +3,9 @@ import { deskDefaults, generateDesk, GeneratorRefusal } from './generator';
 import { generateUsage, parseGenerateArgs, type GenerateArgs } from './generator/generate-args';
 
 /**
- * Writes a large invented desk (people, claimants, sources, claims) straight into the
- * database named by the DB_* variables, for scale tests and benchmarks. Never the demo.
+ * Writes a large invented desk (people, claimants, sources, claims with their workings,
+ * verdicts and published explainers) straight into the database named by the DB_*
+ * variables, for scale tests and benchmarks. Never the demo.
  */
 async function main(): Promise<number> {
   let args: GenerateArgs;

@@ -1,9 +1,9 @@
-import { type Page } from 'playwright-core';
 import { beforeEach, describe, expect, it } from 'vitest';
 // The demo seed's own PNG writer, so the capture is a real picture and not a stand-in.
 import { encodePng, RgbImage } from '../../../seeds-demo/src/captures/png';
 import { expectAccessible, phone, screenshot, useBrowser, type Browser } from './support/browser';
 import { demo, signIn } from './support/desk';
+import { openTab, pickOption } from './support/screens';
 
 // Invented for this test, like everything at the Marrowby Gazette.
 const summary = 'Wind turbines make the local weather warmer';
@@ -15,15 +15,6 @@ function capturePng(): Buffer {
   image.drawText('FELL NEWSLETTER', 8, 5, [255, 255, 255]);
   image.drawText('TURBINES WARM THE VALLEY', 8, 40, [30, 30, 30], 1);
   return encodePng(image);
-}
-
-async function pickOption(page: Page, combobox: string, option: string) {
-  await page.getByRole('combobox', { name: combobox }).click();
-  await page.getByRole('option', { name: option, exact: true }).click();
-}
-
-async function openTab(page: Page, name: RegExp) {
-  await page.getByRole('tab', { name }).click();
 }
 
 describe('the claims desk', () => {
@@ -146,11 +137,14 @@ describe('the claims desk', () => {
     const page = await browser.newPage(phone);
     await signIn(page, browser.baseUrl, demo.science_editor.email);
     await page.goto(`${browser.baseUrl}/claims`);
-    await page.getByRole('table').getByRole('link', { name: summary }).waitFor();
+    // A phone gets the queue as a list of cards rather than a table.
+    const cards = page.getByRole('list', { name: 'Claims in the queue' });
+    await cards.getByRole('link', { name: summary }).waitFor();
+    expect(await page.getByRole('table').isVisible()).toBe(false);
     await expectAccessible(page);
     await screenshot(page, 'queue-phone');
 
-    await page.getByRole('table').getByRole('link', { name: summary }).click();
+    await cards.getByRole('link', { name: summary }).click();
     await page.getByRole('heading', { level: 1, name: summary }).waitFor();
     await expectAccessible(page);
     await screenshot(page, 'claim-phone');

@@ -105,9 +105,10 @@ describe('datasets', () => {
       'Gauge anomaly from 2010 to 2017, 8 values: lowest 0.05 K (2011), highest 0.66 K (2016)',
     );
     await figure.getByText('Show the data as a table').click();
-    expect(
-      await figure.getByRole('table', { name: 'Gauge anomaly (K): data' }).getByRole('row').count(),
-    ).toBe(9);
+    // The table is built when the details open, after the click returns.
+    const dataTable = figure.getByRole('table', { name: 'Gauge anomaly (K): data' });
+    await dataTable.waitFor();
+    expect(await dataTable.getByRole('row').count()).toBe(9);
     const [download] = await Promise.all([
       page.waitForEvent('download'),
       page.getByRole('button', { name: 'Download the original CSV' }).click(),

@@ -1,4 +1,3 @@
-import { type Page } from 'playwright-core';
 import { beforeEach, describe, expect, it } from 'vitest';
 import {
   desktop,
@@ -8,8 +7,16 @@ import {
   useBrowser,
   type Browser,
 } from './support/browser';
-import { demo, demoPassword, signIn } from './support/desk';
+import { demo, deskApi, signIn } from './support/desk';
 import { waitForMail } from './support/mailbox';
+import {
+  explainWithWorking,
+  insertInExplainer,
+  literal,
+  pickOption,
+  replaceParagraph,
+  saveAndSubmitDraft,
+} from './support/screens';
 
 // A demo claim in research, given to the science editor, with two graded sources and a
 // logged reply; flagged for legal review, as it points at a private individual
@@ -19,53 +26,18 @@ const primarySource = 'How readings at the Marrowby station are checked (demo st
 const sendBackNote = 'Say how many stations the readings are checked against.';
 const trendTitle = 'Trend with an honest interval';
 
-async function pickOption(page: Page, combobox: string, option: string | RegExp) {
-  await page.getByRole('combobox', { name: combobox }).click();
-  await page.getByRole('option', { name: option }).click();
-}
-
-/** Puts the caret at the end of a paragraph of the explainer and replaces its words. */
-async function replaceParagraph(page: Page, paragraph: string, words: string) {
-  const editor = page.getByRole('textbox', { name: 'Explainer' });
-  await editor.getByText(paragraph, { exact: true }).click();
-  await page.keyboard.press('End');
-  await page.keyboard.press('Shift+Home');
-  await page.keyboard.type(words);
-}
-
-/** The desk's API as one demo person, outside the browser's own session. */
-async function apiAs(baseUrl: string, email: string) {
-  const signedIn = await fetch(`${baseUrl}/api/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email, password: demoPassword }),
-  });
-  const { accessToken } = (await signedIn.json()) as { accessToken: string };
-  return (path: string, init: RequestInit = {}) =>
-    fetch(`${baseUrl}/api${path}`, {
-      ...init,
-      headers: { Authorization: `Bearer ${accessToken}`, 'Content-Type': 'application/json' },
-    });
-}
-
 /** The editor's working on the claim: the station's trend, run by the server (as the workbench saves it). */
 async function addStationTrend(baseUrl: string, claimId: string) {
-  const editor = await apiAs(baseUrl, demo.science_editor.email);
-  const datasets = (await (await editor('/datasets')).json()) as Array<{
-    id: string;
-    name: string;
-  }>;
+  const editor = await deskApi(baseUrl, demo.science_editor.email);
+  const datasets = await editor<Array<{ id: string; name: string }>>('GET', '/datasets');
   const station = datasets.find((dataset) => dataset.name.includes('Marrowby station'));
   expect(station).toBeDefined();
-  const saved = await editor(`/claims/${claimId}/workings`, {
-    method: 'POST',
-    body: JSON.stringify({
-      calculatorId: 'trend',
-      inputs: { series: { dataset: station!.id, column: 'anomaly_k' }, seriesUnit: 'K' },
-      note: 'The station record’s trend with its interval, to set beside its neighbours.',
-    }),
+  // deskApi throws unless the API saves it (201).
+  await editor('POST', `/claims/${claimId}/workings`, {
+    calculatorId: 'trend',
+    inputs: { series: { dataset: station!.id, column: 'anomaly_k' }, seriesUnit: 'K' },
+    note: 'The station record’s trend with its interval, to set beside its neighbours.',
   });
-  expect(saved.status).toBe(201);
 }
 
 function signoffLink(text: string | undefined): string {
@@ -97,8 +69,12 @@ describe('verdicts and sign-off', () => {
     const editor = page.getByRole('textbox', { name: 'Explainer' });
     await editor.getByText('What the evidence shows').waitFor();
 
-    await pickOption(page, 'Rating', 'Unfounded');
-    await pickOption(page, 'Primary source for the central finding', primarySource);
+    await pickOption(page, 'Rating', /Unfounded$/);
+    await pickOption(
+      page,
+      'Primary source for the central finding',
+      new RegExp(`^${literal(primarySource)}`),
+    );
     await page
       .getByLabel('Bottom line')
       .fill(
@@ -110,12 +86,7 @@ describe('verdicts and sign-off', () => {
       'State the fact plainly, with its source and how sure the science is.',
       'The Marrowby record warms at the same pace as the other stations of the region, and each month’s readings are checked against theirs before they are kept',
     );
-    await page.getByRole('button', { name: 'Cite source' }).click();
-    await page
-      .getByRole('dialog')
-      .getByRole('button', { name: `Cite ${primarySource}` })
-      .click();
-    await page.getByRole('dialog').waitFor({ state: 'detached' });
+    await insertInExplainer(page, 'Cite source', primarySource);
     await editor.getByText('[1]').waitFor();
     await page.keyboard.type('. It is ');
     await page.getByRole('button', { name: 'Uncertainty words' }).click();
@@ -123,18 +94,11 @@ describe('verdicts and sign-off', () => {
     await page.getByRole('menu').waitFor({ state: 'detached' });
     await page.keyboard.type(' that the warming in the record is real.');
 
-    await replaceParagraph(
+    await explainWithWorking(
       page,
-      'Explain the error or the missing context, and show the working.',
       'No one volunteer could move a record that is checked against its neighbours every month. The working fits the record’s trend with its interval:',
+      trendTitle,
     );
-    await page.keyboard.press('Enter');
-    await page.getByRole('button', { name: 'Insert working' }).click();
-    await page
-      .getByRole('dialog')
-      .getByRole('button', { name: `Insert ${trendTitle}` })
-      .click();
-    await editor.getByText(trendTitle).waitFor();
     await editor.getByText('very likely (90–100 %)').waitFor();
     const cited = page.getByRole('list', { name: 'Sources cited in the explainer' });
     await cited.getByText(primarySource).waitFor();
@@ -146,11 +110,7 @@ describe('verdicts and sign-off', () => {
     await screenshot(page, 'verdict-editor-phone');
     await page.setViewportSize(desktop);
 
-    await page.getByRole('button', { name: 'Save the draft' }).click();
-    await page.getByText('The draft of version 1 is saved.').waitFor();
-    await page.getByText('All changes saved.').waitFor();
-    await page.getByRole('button', { name: 'Submit for sign-off' }).click();
-    await page.getByText('Version 1 is submitted for sign-off').waitFor();
+    await saveAndSubmitDraft(page, 1);
     // Now frozen and read-only: the working and the citation drawn from what was stored.
     const latest = page.getByRole('region', { name: 'Version 1: awaiting sign-off' });
     await latest.getByRole('link', { name: '[1]' }).waitFor();
@@ -221,10 +181,7 @@ describe('verdicts and sign-off', () => {
       .fill(
         'The station’s readings are checked against five neighbouring stations every month, and its record warms at the same pace as theirs: nothing points to readings nudged up.',
       );
-    await editorPage.getByRole('button', { name: 'Save the draft' }).click();
-    await editorPage.getByText('The draft of version 2 is saved.').waitFor();
-    await editorPage.getByRole('button', { name: 'Submit for sign-off' }).click();
-    await editorPage.getByText('Version 2 is submitted for sign-off').waitFor();
+    await saveAndSubmitDraft(editorPage, 2);
     await editorPage.close();
     const second = await waitForMail(
       demo.copy_desk.email,
@@ -236,13 +193,13 @@ describe('verdicts and sign-off', () => {
 
     // The claimant is a private individual: a desk chief clears the legal-review flag once
     // counsel has seen it (the claim page's edit form does the same).
-    const chief = await apiAs(browser.baseUrl, demo.desk_chief.email);
-    const claim = (await (await chief(`/claims/${claimId}`)).json()) as { version: number };
-    const cleared = await chief(`/claims/${claimId}`, {
-      method: 'PATCH',
-      body: JSON.stringify({ legalReview: false, version: claim.version }),
+    const chief = await deskApi(browser.baseUrl, demo.desk_chief.email);
+    const claim = await chief<{ version: number }>('GET', `/claims/${claimId}`);
+    const cleared = await chief<{ legalReview: boolean }>('PATCH', `/claims/${claimId}`, {
+      legalReview: false,
+      version: claim.version,
     });
-    expect(cleared.status).toBe(200);
+    expect(cleared.legalReview).toBe(false);
 
     const page = await browser.newPage();
     await signIn(page, browser.baseUrl, demo.copy_desk.email);

@@ -9,6 +9,7 @@ import {
   type Browser,
 } from './support/browser';
 import { demo, signIn } from './support/desk';
+import { pickOption } from './support/screens';
 
 // The demo seed's SYNTHETIC station series (seeds-demo/src/datasets/demo-datasets.ts).
 const stationDataset = 'SYNTHETIC Marrowby station annual anomalies, 1979–2025';
@@ -47,11 +48,6 @@ async function pickClaim(panel: Locator, summary: RegExp) {
     await panel.getByText(new RegExp(`^Claims ${(page + 1) * 8 + 1}–`)).waitFor();
   }
   throw new Error(`no claim ${summary} in the save panel`);
-}
-
-async function pickOption(page: Page, combobox: string, option: string) {
-  await page.getByRole('combobox', { name: combobox }).click();
-  await page.getByRole('option', { name: option, exact: true }).click();
 }
 
 describe('the workbench', () => {

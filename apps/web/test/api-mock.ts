@@ -85,6 +85,7 @@ export function mockApi(initialRoutes: Routes) {
     });
   });
   vi.stubGlobal('fetch', fetchMock);
+  vi.stubGlobal('XMLHttpRequest', fakeXhrOver(fetchMock));
 
   return {
     requests,
@@ -92,5 +93,67 @@ export function mockApi(initialRoutes: Routes) {
     calls: (route: string) => requests.filter((r) => `${r.method} ${r.path}` === route),
     /** Replaces or adds routes mid-test, e.g. what a refetch will answer. */
     use: (more: Routes) => Object.assign(routes, more),
+  };
+}
+
+/**
+ * An XMLHttpRequest that answers from the same fake API, for uploads that report their
+ * progress: the whole body "goes up" in one step, then the route's reply comes back.
+ */
+function fakeXhrOver(fetchMock: (input: string, init: RequestInit) => Promise<Response>) {
+  return class FakeXhr {
+    readonly upload: { onprogress: ((event: ProgressEvent) => void) | null } = {
+      onprogress: null,
+    };
+    onload: (() => void) | null = null;
+    onerror: (() => void) | null = null;
+    onabort: (() => void) | null = null;
+    responseType = '';
+    status = 0;
+    statusText = '';
+    response: Blob | null = null;
+    private method = 'GET';
+    private url = '';
+    private readonly headers = new Headers();
+    private answerHeaders = new Headers();
+
+    open(method: string, url: string) {
+      this.method = method;
+      this.url = url;
+    }
+
+    setRequestHeader(name: string, value: string) {
+      this.headers.set(name, value);
+    }
+
+    getAllResponseHeaders(): string {
+      return [...this.answerHeaders].map(([name, value]) => `${name}: ${value}`).join('\r\n');
+    }
+
+    abort() {
+      this.onabort?.();
+    }
+
+    send(body: FormData) {
+      const size = [...body.values()].reduce(
+        (sum, value) => sum + (typeof value === 'string' ? value.length : value.size),
+        0,
+      );
+      this.upload.onprogress?.({
+        lengthComputable: true,
+        loaded: size,
+        total: size,
+      } as ProgressEvent);
+      fetchMock(this.url, { method: this.method, headers: this.headers, body }).then(
+        async (response) => {
+          this.status = response.status;
+          this.statusText = response.statusText;
+          this.answerHeaders = response.headers;
+          this.response = await response.blob();
+          this.onload?.();
+        },
+        () => this.onerror?.(),
+      );
+    }
   };
 }

@@ -121,7 +121,9 @@ describe('the workings of a claim', { timeout: 20_000 }, () => {
   it('says when a claim has no workings yet', async () => {
     mockApi(workingRoutes([]));
     renderWorkings('science_editor');
-    expect(await screen.findByText('No workings on this claim yet.')).toBeInTheDocument();
+    expect(await screen.findByText(/^No workings on this claim yet\./)).toHaveTextContent(
+      'Run a calculator in the workbench and save its result here.',
+    );
   });
 
   it('re-runs a working with the current library and lists what changed', async () => {

@@ -68,9 +68,15 @@ describe('the claims queue', () => {
 
     await waitFor(() => expect(location()).toBe(`/claims?claimant=${councillor.id}`));
     expect(fake.calls('GET /api/claimants')[0]?.search.get('q')).toBe('threl');
-    expect(
-      await screen.findByText('Cllr Edwin Threlkeld', { selector: 'span.rt-Text' }),
-    ).toBeInTheDocument();
+    // The filters are drawn afresh for the new address; the chosen claimant shows in them.
+    await waitFor(() =>
+      expect(
+        within(screen.getByRole('form', { name: 'Filter the queue' })).getByText(
+          'Cllr Edwin Threlkeld',
+          { selector: 'span.rt-Text' },
+        ),
+      ).toBeInTheDocument(),
+    );
   });
 
   it('sorts on the server when a column header is pressed, and pages through', async () => {

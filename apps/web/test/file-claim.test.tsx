@@ -259,11 +259,14 @@ describe('filing a claim', { timeout: 20_000 }, () => {
         /The claim is filed, but its capture was not attached: The desk takes PDF/,
       ),
     ).toBeInTheDocument();
+    // The toast is up before the claim page has loaded: wait for the page's open tab.
+    expect(
+      await screen.findByRole('tab', { name: /Appearances/, selected: true }),
+    ).toBeInTheDocument();
     expect(location()).toBe(`/claims/${newClaimId}`);
     expect(fake.calls(`PATCH /api/claims/${newClaimId}/appearances/${appearanceId}`)).toHaveLength(
       0,
     );
-    expect(screen.getByRole('tab', { name: /Appearances/, selected: true })).toBeInTheDocument();
   });
 
   it('tells the copy desk that filing is not for their role', async () => {

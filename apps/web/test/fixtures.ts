@@ -1,6 +1,8 @@
 import type { CurrentUser, Role, SessionResponse, UserListItem } from '@skyledger/contracts';
 
-// The invented Marrowby Gazette science desk.
+// The invented Marrowby Gazette science desk, which works on London's clock.
+const desk = { deskTimeZone: 'Europe/London', newsroomName: 'Marrowby Gazette' };
+
 export const deskPeople: Record<Role, CurrentUser> = {
   desk_chief: {
     id: '7f1c2b4e-0a61-4a8e-9d0c-1f00000000c1',
@@ -8,6 +10,7 @@ export const deskPeople: Record<Role, CurrentUser> = {
     displayName: 'Mara Quill',
     role: 'desk_chief',
     status: 'active',
+    ...desk,
   },
   science_editor: {
     id: '7f1c2b4e-0a61-4a8e-9d0c-1f00000000e1',
@@ -15,6 +18,7 @@ export const deskPeople: Record<Role, CurrentUser> = {
     displayName: 'Tobias Renn',
     role: 'science_editor',
     status: 'active',
+    ...desk,
   },
   copy_desk: {
     id: '7f1c2b4e-0a61-4a8e-9d0c-1f00000000d1',
@@ -22,6 +26,7 @@ export const deskPeople: Record<Role, CurrentUser> = {
     displayName: 'Ines Calder',
     role: 'copy_desk',
     status: 'active',
+    ...desk,
   },
   reporter: {
     id: '7f1c2b4e-0a61-4a8e-9d0c-1f00000000a1',
@@ -29,6 +34,7 @@ export const deskPeople: Record<Role, CurrentUser> = {
     displayName: 'Joss Whitcombe',
     role: 'reporter',
     status: 'active',
+    ...desk,
   },
 };
 
@@ -36,7 +42,10 @@ export function sessionFor(role: Role, accessToken = `token-${role}`): SessionRe
   return { accessToken, expiresIn: 900, user: deskPeople[role] };
 }
 
-function listItem(user: CurrentUser, extra: Partial<UserListItem> = {}): UserListItem {
+function listItem(
+  { deskTimeZone: _zone, newsroomName: _newsroom, ...user }: CurrentUser,
+  extra: Partial<UserListItem> = {},
+): UserListItem {
   return {
     ...user,
     createdAt: '2026-01-12T09:30:00.000Z',

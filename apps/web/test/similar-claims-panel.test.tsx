@@ -170,6 +170,6 @@ describe('similar claims panel', () => {
     await realTime();
 
     expect(await screen.findByText('No similar claims on the desk.')).toHaveRole('status');
-    expect(screen.queryByRole('region')).toBeNull();
+    expect(screen.queryByRole('region', { name: 'Already on the desk?' })).toBeNull();
   });
 });

@@ -7,6 +7,7 @@ import {
 import { type SeededRandom } from './random';
 import { type SourceRow } from './source-rows';
 import {
+  type ClaimPattern,
   claimPatterns,
   extraTopics,
   familyNames,
@@ -56,6 +57,13 @@ export interface ClaimRow {
   assigneeId: string | null;
   filedById: string;
   setAsideReason: SetAsideReason | null;
+  /** Set on first publication (verdict-rows.ts). */
+  slug: string | null;
+  firstPublishedAt: Date | null;
+  /** A desk chief's waiver of the right of reply, before a claim is cleared. */
+  replyWaiverReason: string | null;
+  replyWaivedById: string | null;
+  replyWaivedAt: Date | null;
   createdAt: Date;
   updatedAt: Date;
   version: number;
@@ -73,11 +81,13 @@ export interface ClaimSourceRow {
   linkedAt: Date;
 }
 
-/** One generated claim and the rows that hang off it, in the order they are written. */
-export interface GeneratedClaim {
+/** A claim as filed and researched, before its verdict: the rows of the `claims` stream. */
+export interface FiledClaim {
   claim: ClaimRow;
   topics: TopicRow[];
   sourceLinks: ClaimSourceRow[];
+  /** The kind of claim it is, which its working and verdict follow. */
+  pattern: ClaimPattern;
 }
 
 /** The time span generated rows fall in. */
@@ -206,7 +216,7 @@ export function* claimRows(
     /** Sources by topic; a researched claim cites a few on its own topics. */
     sourcesByTopic: ReadonlyMap<string, readonly SourceRow[]>;
   },
-): Generator<GeneratedClaim> {
+): Generator<FiledClaim> {
   const reporters = options.people.filter((person) => person.role === 'reporter');
   const editors = options.people.filter((person) => person.role === 'science_editor');
   const chiefs = options.people.filter((person) => person.role === 'desk_chief');
@@ -278,12 +288,18 @@ export function* claimRows(
                 out_of_scope: 20,
               })
             : null,
+        slug: null,
+        firstPublishedAt: null,
+        replyWaiverReason: null,
+        replyWaivedById: null,
+        replyWaivedAt: null,
         createdAt,
         updatedAt,
         version: 1 + random.below(status === 'filed' ? 2 : 8),
       },
       topics: [...topics].map((topic) => ({ claimId: id, topic })),
       sourceLinks,
+      pattern,
     };
   }
 }

@@ -1,10 +1,11 @@
 import { parseArgs } from 'node:util';
 
 export const generateUsage =
-  'Usage: npm run generate -w seeds-demo -- --claims <count> [--seed <n>] [--until YYYY-MM-DD] [--append]';
+  'Usage: npm run generate -w seeds-demo -- --claims <count> [--explainers <count>] [--seed <n>] [--until YYYY-MM-DD] [--append]';
 
 export interface GenerateArgs {
   claims: number;
+  explainers?: number;
   seed?: number;
   until?: Date;
   append: boolean;
@@ -24,6 +25,7 @@ export function parseGenerateArgs(argv: readonly string[]): GenerateArgs {
     args: [...argv],
     options: {
       claims: { type: 'string' },
+      explainers: { type: 'string' },
       seed: { type: 'string' },
       until: { type: 'string' },
       append: { type: 'boolean', default: false },
@@ -36,6 +38,11 @@ export function parseGenerateArgs(argv: readonly string[]): GenerateArgs {
     claims: wholeNumber('claims', values.claims, 1, 10_000_000),
     append: values.append,
   };
+  if (values.explainers !== undefined) {
+    // Claims drawn as published, about two in three, are where explainers come from.
+    const most = Math.floor(args.claims / 2);
+    args.explainers = wholeNumber('explainers', values.explainers, 0, most);
+  }
   if (values.seed !== undefined) args.seed = wholeNumber('seed', values.seed, 0, 0xffff_ffff);
   if (values.until !== undefined) {
     const until = new Date(`${values.until}T00:00:00Z`);

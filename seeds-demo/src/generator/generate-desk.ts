@@ -6,11 +6,11 @@ import {
   generatedPeople,
   type ClaimantRow,
   type DeskSpan,
-  type GeneratedClaim,
   type PersonRow,
 } from './desk-rows';
 import { SeededRandom } from './random';
 import { sourceRows, sourcesByTopic, type SourceRow } from './source-rows';
+import { withVerdicts, type GeneratedClaim } from './verdict-rows';
 
 export interface DeskOptions {
   claims: number;
@@ -18,6 +18,8 @@ export interface DeskOptions {
   /** The last filing date; fixed by default so a seed gives the same rows on any day. */
   until: Date;
   years: number;
+  /** Published explainers among the claims; by default one claim in twenty. */
+  explainers?: number;
 }
 
 export const deskDefaults = {
@@ -37,6 +39,8 @@ export interface GeneratedDesk {
 /** A claimant makes about 20 claims on average, a source serves about 25. */
 const claimantCount = (claims: number) => Math.max(10, Math.ceil(claims / 20));
 const sourceCount = (claims: number) => Math.max(20, Math.ceil(claims / 25));
+/** A desk publishes an explainer for about one claim in twenty it files. */
+export const defaultExplainers = (claims: number) => Math.round(claims / 20);
 
 /**
  * The generated desk as rows, a pure function of its options: the same seed gives the
@@ -57,16 +61,30 @@ export function generatedDesk(
     count: sourceCount(options.claims),
     people,
   });
+  const sources = library.map(({ source }) => source);
+  const filed = claimRows(SeededRandom.stream(options.seed, 'claims'), {
+    ...span,
+    count: options.claims,
+    claimants,
+    people,
+    sourcesByTopic: sourcesByTopic(library),
+  });
+  const stream = (name: 'workings' | 'verdicts' | 'signoffs' | 'publications') =>
+    SeededRandom.stream(options.seed, name);
   return {
     people,
     claimants,
-    sources: library.map(({ source }) => source),
-    claims: claimRows(SeededRandom.stream(options.seed, 'claims'), {
-      ...span,
-      count: options.claims,
-      claimants,
+    sources,
+    claims: withVerdicts(filed, {
+      streams: {
+        workings: stream('workings'),
+        verdicts: stream('verdicts'),
+        signoffs: stream('signoffs'),
+        publications: stream('publications'),
+      },
+      explainers: options.explainers ?? defaultExplainers(options.claims),
       people,
-      sourcesByTopic: sourcesByTopic(library),
+      sources: new Map(sources.map((source) => [source.id, source])),
     }),
   };
 }
@@ -75,7 +93,18 @@ export function generatedDesk(
 export class GeneratorRefusal extends Error {}
 
 /** Entity names, parents first: the order rows are written in. */
-const writeOrder = ['User', 'Claimant', 'Source', 'Claim', 'ClaimTopic', 'ClaimSource'];
+const writeOrder = [
+  'User',
+  'Claimant',
+  'Source',
+  'Claim',
+  'ClaimTopic',
+  'ClaimSource',
+  'Working',
+  'VerdictVersion',
+  'SignoffDecisionRecord',
+  'Publication',
+];
 
 export interface GenerateResult {
   /** Rows written per entity. */
@@ -124,10 +153,14 @@ export async function generateDesk(
     );
     await writer.add('Claimant', desk.claimants);
     await writer.add('Source', desk.sources);
-    for (const { claim, topics, sourceLinks } of desk.claims) {
-      await writer.add('Claim', [claim]);
-      await writer.add('ClaimTopic', topics);
-      await writer.add('ClaimSource', sourceLinks);
+    for (const generated of desk.claims) {
+      await writer.add('Claim', [generated.claim]);
+      await writer.add('ClaimTopic', generated.topics);
+      await writer.add('ClaimSource', generated.sourceLinks);
+      await writer.add('Working', generated.workings);
+      await writer.add('VerdictVersion', generated.verdictVersions);
+      await writer.add('SignoffDecisionRecord', generated.signoffDecisions);
+      await writer.add('Publication', generated.publications);
     }
     await writer.flush();
     return writer.written;

@@ -7,4 +7,5 @@ export {
   type GenerateResult,
   type GeneratedDesk,
 } from './generate-desk';
-export { GENERATED_EMAIL_DOMAIN, type ClaimRow, type GeneratedClaim } from './desk-rows';
+export { GENERATED_EMAIL_DOMAIN, type ClaimRow } from './desk-rows';
+export { type GeneratedClaim } from './verdict-rows';

@@ -8,7 +8,16 @@ import { type JumpableRandomGenerator } from 'pure-rand/types/JumpableRandomGene
  * adding a kind (or changing how one kind is drawn) leaves the others' rows as they were
  * for the same seed. Append new kinds at the end: a stream's position is its identity.
  */
-export const randomStreams = ['people', 'claimants', 'sources', 'claims'] as const;
+export const randomStreams = [
+  'people',
+  'claimants',
+  'sources',
+  'claims',
+  'workings',
+  'verdicts',
+  'signoffs',
+  'publications',
+] as const;
 export type RandomStream = (typeof randomStreams)[number];
 
 /**

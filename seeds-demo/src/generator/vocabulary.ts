@@ -1,3 +1,4 @@
+import { type CalculatorId } from '@skyledger/calc';
 import { type ReliabilityGrade, type SourceKind } from '@skyledger/contracts';
 
 /**
@@ -11,7 +12,92 @@ export interface ClaimPattern {
   topics: readonly string[];
   /** How often this kind of claim turns up, relative to the others. */
   weight: number;
+  /** The workings a researched claim of this kind gets, in order (keys of `calculations`). */
+  calculations: readonly CalculationKey[];
+  verdict: PatternVerdict;
 }
+
+/** The levels of the default rating scale, as the API's Verdicts migration writes them. */
+export const defaultRatingIds = [
+  'holds-up',
+  'holds-with-caveats',
+  'stretched',
+  'unfounded',
+  'contradicted',
+  'not-checkable',
+] as const;
+export type RatingLevelId = (typeof defaultRatingIds)[number];
+
+/** What the desk concludes about a kind of claim: the verdict of each generated one. */
+export interface PatternVerdict {
+  /** Levels of the default rating scale, with how often each is given. */
+  ratings: Readonly<Partial<Record<RatingLevelId, number>>>;
+  /** The fact the explainer leads with. */
+  fact: string;
+  bottomLine: string;
+  /** Why the claim misleads, after the claim itself. */
+  misleads: string;
+}
+
+/**
+ * The handful of calculator runs generated workings are made of. Each is run once by
+ * @skyledger/calc and its result reused, so every generated working holds real outputs
+ * that the server's recomputation gives again.
+ */
+export const calculations = {
+  'geothermal-flux': {
+    calculatorId: 'heat-flux-compare',
+    inputs: {},
+    note: 'The global geothermal heat flow set against the forcing, with the library’s defaults.',
+  },
+  'solar-change': {
+    calculatorId: 'solar-change',
+    inputs: { irradianceChange: 0.1 },
+    note: 'A change of solar irradiance as large as a solar cycle’s, against the greenhouse forcing.',
+  },
+  sensitivity: {
+    calculatorId: 'warming-from-forcing',
+    inputs: { ecs: { low: 2, high: 5 } },
+    note: 'Warming for today’s forcing across the very likely range of climate sensitivity.',
+  },
+  'co2-forcing': {
+    calculatorId: 'ghg-forcing',
+    inputs: {},
+    note: 'Forcing of the measured rise of CO2, CH4 and N2O by the AR6 expressions.',
+  },
+  'greenhouse-layer': {
+    calculatorId: 'layer-atmosphere',
+    inputs: { layerEmissivity: 0.78 },
+    note: 'One gray layer of air that absorbs most of the outgoing infrared.',
+  },
+  'carbon-units': {
+    calculatorId: 'carbon-units',
+    inputs: {},
+    note: 'Cumulative emissions as a change of concentration, with the library’s defaults.',
+  },
+  'energy-balance': {
+    calculatorId: 'energy-balance',
+    inputs: {},
+    note: 'The planet’s emission temperature from the sunlight it absorbs.',
+  },
+  'ocean-heat': {
+    calculatorId: 'ocean-heat',
+    inputs: {},
+    note: 'The measured gain of ocean heat as a mean flux over the planet.',
+  },
+} as const satisfies Record<
+  string,
+  { calculatorId: CalculatorId; inputs: Readonly<Record<string, unknown>>; note: string }
+>;
+export type CalculationKey = keyof typeof calculations;
+
+/** What an update note to a generated explainer says, by its kind. */
+export const updateNotes = {
+  correction:
+    'An earlier version gave the wrong year for the record it quoted; the figure is now right and the rating is unchanged.',
+  clarification: 'We made clearer which measurements the working uses.',
+  update: 'Updated with the latest year of measurements; the finding stands.',
+} as const;
 
 /** `{place}` and `{year}` are filled in per claim. */
 export const claimPatterns: readonly ClaimPattern[] = [
@@ -20,108 +106,264 @@ export const claimPatterns: readonly ClaimPattern[] = [
     text: 'The ground under {place} is warming us from below; the core is getting hotter.',
     topics: ['geothermal', 'energy-budget'],
     weight: 6,
+    calculations: ['geothermal-flux'],
+    verdict: {
+      ratings: { contradicted: 8, stretched: 1 },
+      fact: 'Heat rising from the Earth’s interior averages under a tenth of a watt per square metre, and it has not changed in centuries.',
+      bottomLine:
+        'The Earth’s interior does leak heat, but about thirty times less than the extra heat greenhouse gases now trap, and that leak has not grown.',
+      misleads:
+        'It takes a real flow of heat and gives it a size it does not have; the working sets the two fluxes side by side.',
+    },
   },
   {
     summary: 'The sun has been getting brighter since {year}',
     text: 'Since {year} the sun has simply been putting out more heat, and that is all warming is.',
     topics: ['solar', 'attribution'],
     weight: 8,
+    calculations: ['solar-change'],
+    verdict: {
+      ratings: { contradicted: 7, unfounded: 2 },
+      fact: 'Satellites have measured the sun’s output since 1978; it has not risen, while the planet has kept warming.',
+      bottomLine:
+        'The sun has not brightened over the satellite era, and a brighter sun would warm the upper atmosphere too, which is cooling instead.',
+      misleads:
+        'It points at the one source of heat that has been measured to stay flat; the working sets a change of sunlight against the greenhouse forcing.',
+    },
   },
   {
     summary: 'Global warming stopped in {year}',
     text: 'There has been no warming since {year}; the record has been flat ever since.',
     topics: ['temperature-record', 'trends'],
     weight: 10,
+    calculations: ['sensitivity'],
+    verdict: {
+      ratings: { contradicted: 8, stretched: 1 },
+      fact: 'Each of the last four decades was warmer than the one before it, in every major record of global temperature.',
+      bottomLine:
+        'Starting from an unusually hot year makes any short stretch look flat; over decades the warming has not paused.',
+      misleads:
+        'A trend needs many years, and a start year chosen after the fact says more about the choice than about the climate.',
+    },
   },
   {
     summary: 'CO2 is too small a share of the air to matter',
     text: 'Carbon dioxide is only 0.04 per cent of the atmosphere, far too little to change anything.',
     topics: ['carbon-dioxide', 'greenhouse-effect'],
     weight: 9,
+    calculations: ['co2-forcing'],
+    verdict: {
+      ratings: { contradicted: 8 },
+      fact: 'Carbon dioxide absorbs infrared radiation that nitrogen and oxygen, the bulk of the air, let straight through.',
+      bottomLine:
+        'A small share of the air can still matter: the rise of CO2 since 1750 adds about two watts per square metre of forcing.',
+      misleads:
+        'It treats an effect as if it grew with the amount of gas alone; the working computes the forcing from the measured rise.',
+    },
   },
   {
     summary: 'Water vapour, not CO2, does all the greenhouse warming',
     text: 'Water vapour is the real greenhouse gas; carbon dioxide is a rounding error.',
     topics: ['water-vapour', 'greenhouse-effect'],
     weight: 5,
+    calculations: ['greenhouse-layer'],
+    verdict: {
+      ratings: { stretched: 5, contradicted: 3 },
+      fact: 'Water vapour is the largest greenhouse gas, but how much of it the air holds is set by temperature, so it follows warming rather than starting it.',
+      bottomLine:
+        'Water vapour amplifies the warming CO2 starts; it cannot drive a lasting warming itself, because extra vapour rains out within days.',
+      misleads:
+        'It turns a feedback into a cause; the working shows how an absorbing layer of air warms the surface.',
+    },
   },
   {
     summary: 'Volcanoes put out more CO2 than people do',
     text: 'One eruption near {place} released more carbon dioxide than all our cars in a year.',
     topics: ['volcanoes', 'carbon-dioxide'],
     weight: 5,
+    calculations: ['carbon-units'],
+    verdict: {
+      ratings: { contradicted: 9 },
+      fact: 'The world’s volcanoes, on land and under the sea, emit well under a billion tonnes of CO2 a year, about one per cent of what human activity emits.',
+      bottomLine:
+        'Human emissions are around a hundred times those of all the world’s volcanoes, year after year.',
+      misleads:
+        'One large eruption is dramatic but brief; the working turns emissions into the change of concentration they cause.',
+    },
   },
   {
     summary: 'Cosmic rays set the climate through the clouds',
     text: 'Cosmic rays seed the clouds, and the clouds decide the temperature, not us.',
     topics: ['cosmic-rays', 'clouds'],
     weight: 3,
+    calculations: ['energy-balance'],
+    verdict: {
+      ratings: { unfounded: 6, contradicted: 3 },
+      fact: 'The flux of cosmic rays reaching the Earth shows no trend over the decades in which the planet warmed.',
+      bottomLine:
+        'Cosmic rays may nudge cloud formation slightly, but their flux has not changed in a way that could explain the warming.',
+      misleads:
+        'A possible mechanism is not a measured cause; the working shows how the planet’s temperature follows the sunlight it absorbs.',
+    },
   },
   {
     summary: 'The oceans are heated by undersea volcanoes',
     text: 'The sea off {place} is warming because of volcanoes on the seabed.',
     topics: ['ocean-heat', 'volcanoes'],
     weight: 3,
+    calculations: ['ocean-heat', 'geothermal-flux'],
+    verdict: {
+      ratings: { contradicted: 8 },
+      fact: 'The oceans are warming from the top down, the pattern of heat arriving from the air above rather than from the seabed.',
+      bottomLine:
+        'The oceans have gained far more heat than all the heat flowing up through the seafloor could supply.',
+      misleads:
+        'It blames a steady, small flow of heat for a large and growing gain; the working turns the measured gain into a flux.',
+    },
   },
   {
     summary: 'The {year} cold snap in {place} disproves global warming',
     text: 'We had snow in {place} in {year}. So much for global warming.',
     topics: ['temperature-record', 'weather-vs-climate'],
     weight: 7,
+    calculations: [],
+    verdict: {
+      ratings: { contradicted: 7, 'not-checkable': 1 },
+      fact: 'Global temperature is the average over the whole planet and many years; one cold spell in one town is weather.',
+      bottomLine:
+        'A cold snap in one place says nothing about the global trend, which is measured over decades and over the whole planet.',
+      misleads: 'It swaps weather for climate.',
+    },
   },
   {
     summary: 'The {place} weather station was moved to make it warmer',
     text: 'They moved the {place} station next to a car park in {year} and called it warming.',
     topics: ['station-data', 'urban-heat'],
     weight: 4,
+    calculations: [],
+    verdict: {
+      ratings: { stretched: 5, unfounded: 3 },
+      fact: 'Station moves are found and adjusted for, and satellites and untouched rural stations show the same warming.',
+      bottomLine:
+        'Moving a station can shift its readings, which is why records are adjusted, but the warming does not rest on any one station.',
+      misleads: 'It takes a known and corrected problem and treats it as the whole of the record.',
+    },
   },
   {
     summary: 'Sea level at {place} has not risen since {year}',
     text: 'The harbour wall at {place} has the same high-water mark as in {year}.',
     topics: ['sea-level'],
     weight: 5,
+    calculations: [],
+    verdict: {
+      ratings: { contradicted: 6, stretched: 2 },
+      fact: 'Tide gauges and satellites show global sea level rising by a few millimetres a year.',
+      bottomLine:
+        'A mark on a harbour wall cannot show a rise of a few millimetres a year, and the land itself can move; measured sea level is rising.',
+      misleads: 'One unmeasured mark stands in for a century of careful records.',
+    },
   },
   {
     summary: 'Arctic sea ice has recovered to its {year} extent',
     text: 'The Arctic ice is back where it was in {year}; the melt has reversed.',
     topics: ['sea-ice', 'trends'],
     weight: 4,
+    calculations: [],
+    verdict: {
+      ratings: { contradicted: 7 },
+      fact: 'The Arctic’s late-summer ice extent has fallen by about an eighth per decade since satellite records began in 1979.',
+      bottomLine:
+        'Arctic ice recovers a little in some years, but the summer minimum is far below where it was in the 1980s and still falling.',
+      misleads: 'It compares one good year with another and leaves out the trend between them.',
+    },
   },
   {
     summary: 'Climate has always changed, so today’s change is natural',
     text: 'The climate changed long before factories, so this is just another natural cycle.',
     topics: ['attribution', 'paleoclimate'],
     weight: 7,
+    calculations: ['co2-forcing'],
+    verdict: {
+      ratings: { stretched: 6, contradicted: 3 },
+      fact: 'Past changes of climate had causes, such as orbital cycles and volcanoes; today’s warming is traced to greenhouse gases by its pattern and its pace.',
+      bottomLine:
+        'That the climate changed before does not make this change natural, any more than past forest fires prove every fire natural.',
+      misleads:
+        'It takes natural change in the past as proof of a natural cause now; the working computes the forcing of the greenhouse gases measured today.',
+    },
   },
   {
     summary: 'The 1930s were hotter than today',
     text: 'The 1930s were the hottest decade on record, hotter than anything since.',
     topics: ['temperature-record'],
     weight: 4,
+    calculations: [],
+    verdict: {
+      ratings: { contradicted: 7, stretched: 2 },
+      fact: 'The 1930s were hot in parts of North America, but the world as a whole is now around a degree warmer than it was then.',
+      bottomLine:
+        'A decade of regional heatwaves is not a global record; every recent decade has been warmer worldwide than the 1930s.',
+      misleads: 'It mixes up one region with the whole globe.',
+    },
   },
   {
     summary: 'More CO2 only greens the planet, it cannot warm it',
     text: 'Carbon dioxide is plant food; more of it makes {place} greener, not warmer.',
     topics: ['carbon-dioxide', 'ecosystems'],
     weight: 3,
+    calculations: ['co2-forcing'],
+    verdict: {
+      ratings: { stretched: 6, contradicted: 2 },
+      fact: 'Extra CO2 does help many plants grow, and the same extra CO2 traps heat; both happen at once.',
+      bottomLine:
+        'Greening and warming are not alternatives: the same rise of CO2 does both, and the warming is measured.',
+      misleads:
+        'It offers a choice between two effects that happen together; the working computes the forcing of the added CO2.',
+    },
   },
   {
     summary: 'Heat pumps in {place} raise emissions',
     text: 'Every heat pump fitted in {place} since {year} has raised emissions, not cut them.',
     topics: ['energy', 'emissions'],
     weight: 3,
+    calculations: [],
+    verdict: {
+      ratings: { contradicted: 6, stretched: 2 },
+      fact: 'A heat pump delivers three or more units of heat for each unit of electricity it uses.',
+      bottomLine:
+        'Replacing a gas boiler with a heat pump cuts emissions on all but the most coal-heavy electricity grids.',
+      misleads:
+        'It counts the electricity a heat pump uses and forgets the gas it no longer burns.',
+    },
   },
   {
     summary: 'Warming since {year} is all from urban heat islands',
     text: 'Towns like {place} grew around the thermometers; that is the whole of the warming.',
     topics: ['urban-heat', 'station-data'],
     weight: 4,
+    calculations: [],
+    verdict: {
+      ratings: { contradicted: 6, stretched: 3 },
+      fact: 'Towns do run warmer than the countryside, and records remove that effect; the oceans and rural stations have warmed too.',
+      bottomLine:
+        'Urban heat is real locally but cannot explain a warming that is also measured over the open ocean and in the countryside.',
+      misleads: 'It takes a local effect for a global one.',
+    },
   },
   {
     summary: 'Climate sensitivity is too low for CO2 to matter',
     text: 'Doubling carbon dioxide would warm us by a fraction of a degree at most.',
     topics: ['climate-sensitivity', 'carbon-dioxide'],
     weight: 3,
+    calculations: ['sensitivity'],
+    verdict: {
+      ratings: { contradicted: 7, unfounded: 2 },
+      fact: 'A doubling of CO2 very likely (90–100 %) warms the planet by 2 to 5 °C once it settles, with a best estimate of 3 °C.',
+      bottomLine:
+        'Measurements, past climates and physics together rule out a warming of only a fraction of a degree for doubled CO2.',
+      misleads:
+        'It quotes the warming without feedbacks and leaves out the feedbacks that are measured; the working carries the assessed range through.',
+    },
   },
 ];
 

@@ -19,15 +19,20 @@ export interface Browser {
 export interface BrowserOptions {
   /** False to read pages as a browser with JavaScript turned off would. */
   javaScriptEnabled?: boolean;
+  /** True to ignore every page's Content-Security-Policy, as if the server sent none. */
+  bypassCSP?: boolean;
+  /** Another stack than the shared one (a suite that starts its own). */
+  baseUrl?: string;
 }
 
 /** Debian's Chromium, headless, with a fresh profile under the project's ignored tmp/. */
 export async function openBrowser(options: BrowserOptions = {}): Promise<Browser> {
+  const { baseUrl = inject('baseUrl'), ...contextOptions } = options;
   mkdirSync(tmpDir, { recursive: true });
   mkdirSync(screenshotDir, { recursive: true });
   const profile = mkdtempSync(join(tmpDir, 'chr-'));
   const context = await chromium.launchPersistentContext(profile, {
-    ...options,
+    ...contextOptions,
     executablePath: '/usr/bin/chromium',
     headless: true,
     args: [
@@ -41,7 +46,6 @@ export async function openBrowser(options: BrowserOptions = {}): Promise<Browser
       '--disable-sync',
     ],
   });
-  const baseUrl = inject('baseUrl');
   return {
     context,
     baseUrl,

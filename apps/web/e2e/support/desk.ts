@@ -44,13 +44,7 @@ export async function navLinks(page: Page): Promise<string[]> {
  * steps of a flow that a test sets up rather than walks through.
  */
 export async function deskApi(baseUrl: string, email: string, password = demoPassword) {
-  const signedIn = await fetch(`${baseUrl}/api/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email, password }),
-  });
-  if (!signedIn.ok) throw new Error(`signing in as ${email} failed: ${signedIn.status}`);
-  const { accessToken } = (await signedIn.json()) as { accessToken: string };
+  const accessToken = await deskToken(baseUrl, email, password);
   return async <T>(method: 'GET' | 'POST' | 'PATCH' | 'DELETE', path: string, body?: unknown) => {
     const response = await fetch(`${baseUrl}/api${path}`, {
       method,
@@ -62,4 +56,19 @@ export async function deskApi(baseUrl: string, email: string, password = demoPas
     }
     return (await response.json()) as T;
   };
+}
+
+/** An access token for one of the demo people, for requests deskApi does not make (uploads). */
+export async function deskToken(
+  baseUrl: string,
+  email: string,
+  password = demoPassword,
+): Promise<string> {
+  const signedIn = await fetch(`${baseUrl}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  });
+  if (!signedIn.ok) throw new Error(`signing in as ${email} failed: ${signedIn.status}`);
+  return ((await signedIn.json()) as { accessToken: string }).accessToken;
 }

@@ -4,6 +4,7 @@ import '@/styles/theme.css';
 import { Theme } from '@radix-ui/themes';
 import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
+import { Toaster } from '@/components/ui/toaster';
 
 export function AppProvider({
   queryClient,
@@ -15,7 +16,7 @@ export function AppProvider({
   return (
     <QueryClientProvider client={queryClient}>
       <Theme accentColor="jade" grayColor="sage" radius="medium" panelBackground="solid">
-        {children}
+        <Toaster>{children}</Toaster>
       </Theme>
     </QueryClientProvider>
   );

@@ -31,6 +31,8 @@ export interface RequestOptions {
   /** Send the access token and refresh it on a 401 (default true). */
   auth?: boolean;
   signal?: AbortSignal;
+  /** For a multipart upload: how much of the body has gone up, from 0 to 1. */
+  onUploadProgress?: (fraction: number) => void;
 }
 
 export interface SessionEvents {
@@ -76,6 +78,52 @@ async function toApiError(response: Response): Promise<ApiError> {
   return new ApiError(response.status, isApiErrorBody(body) ? body : fallbackBody(response));
 }
 
+/** The answer of an XMLHttpRequest as a fetch Response, so one parser reads both. */
+function responseOf(xhr: XMLHttpRequest): Response {
+  const headers = new Headers();
+  for (const line of xhr
+    .getAllResponseHeaders()
+    .trim()
+    .split(/[\r\n]+/)) {
+    const at = line.indexOf(':');
+    if (at > 0) headers.append(line.slice(0, at).trim(), line.slice(at + 1).trim());
+  }
+  // A 204 or 205 may not carry a body.
+  const body = [204, 205].includes(xhr.status) ? null : (xhr.response as Blob);
+  return new Response(body, { status: xhr.status, statusText: xhr.statusText, headers });
+}
+
+/**
+ * fetch cannot tell how much of an upload has gone; XMLHttpRequest can. Only uploads
+ * that show their progress go this way, with the same headers and the same answer.
+ */
+function sendWithProgress(
+  url: string,
+  method: Method,
+  headers: Headers,
+  body: FormData,
+  onProgress: (fraction: number) => void,
+  signal: AbortSignal | undefined,
+): Promise<Response> {
+  return new Promise((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open(method, url);
+    headers.forEach((value, name) => xhr.setRequestHeader(name, value));
+    xhr.responseType = 'blob';
+    xhr.upload.onprogress = (event) => {
+      if (event.lengthComputable && event.total > 0) onProgress(event.loaded / event.total);
+    };
+    xhr.onload = () => {
+      onProgress(1);
+      resolve(responseOf(xhr));
+    };
+    xhr.onerror = () => reject(new TypeError('The upload failed on the network'));
+    xhr.onabort = () => reject(new DOMException('The upload was cancelled', 'AbortError'));
+    signal?.addEventListener('abort', () => xhr.abort(), { once: true });
+    xhr.send(body);
+  });
+}
+
 async function send(
   path: string,
   options: RequestOptions,
@@ -88,6 +136,16 @@ async function send(
   if (options.body !== undefined && !multipart) headers.set('Content-Type', 'application/json');
   if (token) headers.set('Authorization', `Bearer ${token}`);
   try {
+    if (multipart && options.onUploadProgress) {
+      return await sendWithProgress(
+        buildUrl(path, options.params),
+        options.method ?? 'POST',
+        headers,
+        options.body as FormData,
+        options.onUploadProgress,
+        options.signal,
+      );
+    }
     return await fetch(buildUrl(path, options.params), {
       method: options.method ?? 'GET',
       headers,

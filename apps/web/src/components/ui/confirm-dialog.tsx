@@ -1,7 +1,7 @@
 import { AlertDialog, Button, Flex } from '@radix-ui/themes';
 import { useState, type ReactNode } from 'react';
-import { FormError } from '@/components/ui/form-error';
-import { refusalMessage } from '@/features/verdicts/verdict-words';
+import { errorMessage } from '@/lib/api-error-messages';
+import { FormError } from './form-error';
 
 interface ConfirmDialogProps {
   /** The button that opens the dialog. */
@@ -13,9 +13,15 @@ interface ConfirmDialogProps {
   color: 'red' | 'blue';
   /** Runs the change; the dialog closes when it succeeds and shows the API's refusal if not. */
   onConfirm: () => Promise<unknown>;
+  /** Words for a refusal; the API's own message by default. */
+  describeError?: (error: unknown) => string;
+  maxWidth?: string;
 }
 
-/** Asks before a change that readers or the desk would feel, and says why it was refused. */
+/**
+ * Asks before anything destructive or that readers would feel, and says why it was refused.
+ * The desk's one confirmation.
+ */
 export function ConfirmDialog({
   trigger,
   title,
@@ -24,6 +30,8 @@ export function ConfirmDialog({
   keepLabel,
   color,
   onConfirm,
+  describeError = errorMessage,
+  maxWidth = '520px',
 }: ConfirmDialogProps) {
   const [open, setOpen] = useState(false);
   const [pending, setPending] = useState(false);
@@ -34,7 +42,7 @@ export function ConfirmDialog({
     onConfirm()
       .then(
         () => setOpen(false),
-        (error: unknown) => setRefusal(refusalMessage(error)),
+        (error: unknown) => setRefusal(describeError(error)),
       )
       .finally(() => setPending(false));
   };
@@ -47,7 +55,7 @@ export function ConfirmDialog({
       }}
     >
       <AlertDialog.Trigger>{trigger}</AlertDialog.Trigger>
-      <AlertDialog.Content maxWidth="520px">
+      <AlertDialog.Content maxWidth={maxWidth}>
         <AlertDialog.Title>{title}</AlertDialog.Title>
         <AlertDialog.Description size="2">{description}</AlertDialog.Description>
         <Flex direction="column" gap="3" mt="4">

@@ -1,6 +1,7 @@
-import { Card, DataList, Flex, Heading, Text } from '@radix-ui/themes';
+import { Card, DataList, Flex, Text } from '@radix-ui/themes';
 import { roleLabels, userStatusLabels } from '@skyledger/contracts';
 import { DocumentTitle } from '@/components/ui/document-title';
+import { PageHeader } from '@/components/ui/page-header';
 import { useCurrentUser } from '@/features/auth/current-user';
 import { SignOutButton } from '@/features/auth/components/sign-out-button';
 import { NotificationSettings } from '@/features/notifications/components/notification-settings';
@@ -11,9 +12,10 @@ export function Component() {
   return (
     <Flex direction="column" gap="5" maxWidth="640px">
       <DocumentTitle title="Account" />
-      <Heading as="h1" size="7">
-        Your account
-      </Heading>
+      <PageHeader
+        title="Your account"
+        purpose="Who you are on the desk, what your role lets you do, and which mails the desk sends you."
+      />
       <Card size="3">
         <DataList.Root orientation={{ initial: 'vertical', sm: 'horizontal' }}>
           <DataList.Item>

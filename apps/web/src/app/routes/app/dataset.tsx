@@ -1,12 +1,10 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { uuidSchema } from '@skyledger/contracts';
-import { useState } from 'react';
-import { data, useLocation, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { data, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { sessionQueryOptions } from '@/features/auth/api/get-session';
 import { useCurrentUser } from '@/features/auth/current-user';
 import { datasetQueryOptions } from '@/features/datasets/api/get-dataset';
 import { DatasetView } from '@/features/datasets/components/dataset-view';
-import { datasetPageNotice } from '@/features/datasets/dataset-page-state';
 import { isApiError } from '@/lib/api-client';
 import { mayOpen, navItem } from '../../nav-items';
 import { NoAccess } from './no-access';
@@ -28,8 +26,6 @@ export const clientLoader =
 export function Component() {
   const user = useCurrentUser();
   const { datasetId = '' } = useParams();
-  const location = useLocation();
-  const [notice] = useState(() => datasetPageNotice(location.state));
   if (!mayOpen(user.role, 'datasets')) return <NoAccess item={navItem('datasets')} />;
-  return <DatasetView key={datasetId} datasetId={datasetId} notice={notice} />;
+  return <DatasetView key={datasetId} datasetId={datasetId} />;
 }

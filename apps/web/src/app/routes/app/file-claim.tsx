@@ -1,5 +1,6 @@
-import { Flex, Heading, Text } from '@radix-ui/themes';
+import { Flex } from '@radix-ui/themes';
 import { DocumentTitle } from '@/components/ui/document-title';
+import { PageHeader } from '@/components/ui/page-header';
 import { useCurrentUser } from '@/features/auth/current-user';
 import { FileClaimForm } from '@/features/claims/components/file-claim/file-claim-form';
 import { mayOpen, navItem } from '../../nav-items';
@@ -11,14 +12,10 @@ export function Component() {
   return (
     <Flex direction="column" gap="5" maxWidth="760px">
       <DocumentTitle title="File a claim" />
-      <Flex direction="column" gap="1">
-        <Heading as="h1" size="7">
-          File a claim
-        </Heading>
-        <Text color="gray">
-          Log a claim you met on the beat: what was said, who said it, and where you saw it.
-        </Text>
-      </Flex>
+      <PageHeader
+        title="File a claim"
+        purpose="Log a claim you met on the beat: what was said, who said it, and where you saw it. Earlier claims like it show as you type, so the desk does not check the same thing twice."
+      />
       <FileClaimForm />
     </Flex>
   );

@@ -1,5 +1,6 @@
-import { Flex, Heading, Text } from '@radix-ui/themes';
+import { Flex } from '@radix-ui/themes';
 import { DocumentTitle } from '@/components/ui/document-title';
+import { PageHeader } from '@/components/ui/page-header';
 import { useCurrentUser } from '@/features/auth/current-user';
 import { ImportDataset } from '@/features/datasets/components/import/import-dataset';
 import { datasetImportRoles, mayImportDataset } from '@/features/datasets/dataset-permissions';
@@ -18,15 +19,10 @@ export function Component() {
   return (
     <Flex direction="column" gap="5" maxWidth="960px">
       <DocumentTitle title="Import a dataset" />
-      <Flex direction="column" gap="1">
-        <Heading as="h1" size="7">
-          Import a dataset
-        </Heading>
-        <Text color="gray">
-          A time series from a CSV file, for trend and comparison workings. Every row is typed on
-          import; a file with a bad row is refused whole, with the line named.
-        </Text>
-      </Flex>
+      <PageHeader
+        title="Import a dataset"
+        purpose="A time series from a CSV file, for trend and comparison workings. Every row is typed on import; a file with a bad row is refused whole, with the line named."
+      />
       <ImportDataset />
     </Flex>
   );

@@ -1,4 +1,4 @@
-import { Code, Flex, Heading, Text } from '@radix-ui/themes';
+import { Code, Flex, Text } from '@radix-ui/themes';
 import type { AuditEventView, AuditQuery } from '@skyledger/contracts';
 import { useNavigation, useSearchParams } from 'react-router-dom';
 import { AppLink } from '@/components/ui/app-link';
@@ -6,6 +6,7 @@ import { DateTime } from '@/components/ui/date-time';
 import { DownloadButton } from '@/components/ui/download-button';
 import { PagePager } from '@/components/ui/page-pager';
 import { ScrollTable } from '@/components/ui/scroll-table';
+import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { describeDetails } from '@/features/claims/components/claim/history/history-words';
 import { auditSearchParams, parseAuditSearch } from '../api/audit-search';
@@ -77,18 +78,11 @@ export function AuditTrail() {
 
   return (
     <Flex direction="column" gap="5">
-      <Flex justify="between" align={{ initial: 'start', sm: 'end' }} gap="4" wrap="wrap">
-        <Flex direction="column" gap="1">
-          <Heading as="h1" size="7">
-            Audit trail
-          </Heading>
-          <Text color="gray" className="sl-prose">
-            Everything done on the desk, newest first. Nothing here can be changed; the export holds
-            every event under the filters, oldest first.
-          </Text>
-        </Flex>
-        <ExportButton query={query} />
-      </Flex>
+      <PageHeader
+        title="Audit trail"
+        purpose="Everything done on the desk, newest first, so you can always show who did what and when. Nothing here can be changed; the export holds every event under the filters, oldest first."
+        action={<ExportButton query={query} />}
+      />
       <AuditFilters
         key={filtersKey}
         query={query}

@@ -8,14 +8,16 @@ export interface AttachCaptureInput {
   file: File;
   /** Told when the bytes are up and the appearance is being pointed at them. */
   onUploaded?: () => void;
+  /** How much of the file has gone up, from 0 to 1. */
+  onProgress?: (fraction: number) => void;
 }
 
 /** Uploads a capture to the claim, then makes it the appearance's archived capture. */
 export async function attachCapture(
   claimId: string,
-  { appearance, file, onUploaded }: AttachCaptureInput,
+  { appearance, file, onUploaded, onProgress }: AttachCaptureInput,
 ): Promise<AppearanceView> {
-  const attachment = await uploadAttachment(claimId, file);
+  const attachment = await uploadAttachment(claimId, file, onProgress);
   onUploaded?.();
   return updateAppearance(claimId, {
     appearanceId: appearance.id,

@@ -11,6 +11,8 @@ export interface FileClaimInput {
   /** The archived capture of the first appearance, uploaded once the claim exists. */
   capture: File | null;
   onStage?: (stage: FilingStage) => void;
+  /** How much of the capture has gone up, from 0 to 1. */
+  onProgress?: (fraction: number) => void;
 }
 
 export interface FiledClaim {
@@ -28,6 +30,7 @@ export async function fileClaimWithCapture({
   body,
   capture,
   onStage,
+  onProgress,
 }: FileClaimInput): Promise<FiledClaim> {
   onStage?.('filing');
   const claim = await fileClaim(body);
@@ -39,6 +42,7 @@ export async function fileClaimWithCapture({
       appearance,
       file: capture,
       onUploaded: () => onStage?.('attaching'),
+      onProgress,
     });
     return { claim, captureError: null };
   } catch (captureError) {

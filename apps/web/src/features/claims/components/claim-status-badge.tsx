@@ -19,3 +19,12 @@ export function ClaimStatusBadge({ status }: { status: ClaimStatus }) {
     </Badge>
   );
 }
+
+/** Marks a claim flagged for legal review, wherever the claim is listed or opened. */
+export function LegalReviewBadge({ flagged }: { flagged: boolean }) {
+  return flagged ? (
+    <Badge color="red" variant="soft" highContrast>
+      Legal review
+    </Badge>
+  ) : null;
+}

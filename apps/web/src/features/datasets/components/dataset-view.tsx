@@ -3,7 +3,7 @@ import type { DatasetDetail } from '@skyledger/contracts';
 import { AppLink } from '@/components/ui/app-link';
 import { DateTime } from '@/components/ui/date-time';
 import { DocumentTitle } from '@/components/ui/document-title';
-import { LiveNotice, type Notice } from '@/components/ui/live-notice';
+import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { useDataset } from '../api/get-dataset';
 import { formatDecimalYear } from '../decimal-year';
@@ -16,21 +16,21 @@ function columnPoints(dataset: DatasetDetail, index: number) {
 }
 
 /** One dataset: where it came from, its columns with units, and a chart of each. */
-export function DatasetView({ datasetId, notice }: { datasetId: string; notice: Notice | null }) {
+export function DatasetView({ datasetId }: { datasetId: string }) {
   const { data: dataset } = useDataset(datasetId);
   return (
     <Flex direction="column" gap="5">
       <DocumentTitle title={dataset.name} />
-      <Flex direction="column" gap="2" align="start">
-        {/* High contrast: the accent colour is too faint on the page's grey background. */}
-        <AppLink to={paths.app.datasets.getHref()} size="2" highContrast>
-          All datasets
-        </AppLink>
-        <Heading as="h1" size={{ initial: '6', sm: '7' }} className="sl-break">
-          {dataset.name}
-        </Heading>
-      </Flex>
-      <LiveNotice notice={notice} />
+      <PageHeader
+        above={
+          // High contrast: the accent colour is too faint on the page's grey background.
+          <AppLink to={paths.app.datasets.getHref()} size="2" highContrast>
+            All datasets
+          </AppLink>
+        }
+        title={dataset.name}
+        purpose="One series on the desk: where it came from, its columns with their units, and a chart of each. Trend and comparison workings in the workbench read it by name."
+      />
       <Card size="3">
         <Flex direction="column" gap="4">
           <Text as="p" className="sl-prose sl-pre-line">

@@ -5,7 +5,6 @@ import {
   Card,
   Callout,
   Flex,
-  Heading,
   Spinner,
   Table,
   Text,
@@ -15,6 +14,7 @@ import type { DatasetSummary, Role } from '@skyledger/contracts';
 import { Link as RouterLink } from 'react-router-dom';
 import { AppLink } from '@/components/ui/app-link';
 import { DateTime } from '@/components/ui/date-time';
+import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { errorMessage } from '@/lib/api-error-messages';
 import { useDatasets } from '../api/get-datasets';
@@ -82,24 +82,20 @@ export function DatasetsIndex({ role }: { role: Role }) {
   const mayImport = mayImportDataset(role);
   return (
     <Flex direction="column" gap="5">
-      <Flex justify="between" align="end" gap="4" wrap="wrap">
-        <Flex direction="column" gap="1">
-          <Heading as="h1" size="7">
-            Datasets
-          </Heading>
-          <Text color="gray" className="sl-prose" size="2">
-            Time series uploaded as CSV files, typed row by row, for trend and comparison workings.
-          </Text>
-        </Flex>
-        {mayImport ? (
-          <Button asChild highContrast>
-            <RouterLink to={paths.app.newDataset.getHref()}>
-              <PlusIcon aria-hidden />
-              Import a dataset
-            </RouterLink>
-          </Button>
-        ) : null}
-      </Flex>
+      <PageHeader
+        title="Datasets"
+        purpose="Time series uploaded as CSV files, typed row by row, for the workbench’s trend and comparison workings to read."
+        action={
+          mayImport ? (
+            <Button asChild highContrast>
+              <RouterLink to={paths.app.newDataset.getHref()}>
+                <PlusIcon aria-hidden />
+                Import a dataset
+              </RouterLink>
+            </Button>
+          ) : null
+        }
+      />
       {datasets.isPending ? (
         <Flex align="center" gap="3" role="status">
           <Spinner />

@@ -3,7 +3,7 @@ import type { NotificationKind, NotificationSettingsView } from '@skyledger/cont
 import { useState } from 'react';
 import { CheckboxField } from '@/components/ui/checkbox-field';
 import { FormError } from '@/components/ui/form-error';
-import { LiveNotice, type Notice } from '@/components/ui/live-notice';
+import { useShowNotice } from '@/components/ui/toaster';
 import { errorMessage } from '@/lib/api-error-messages';
 import { useNotificationSettings } from '../api/get-notification-settings';
 import { useUpdateNotificationSettings } from '../api/update-notification-settings';
@@ -13,16 +13,15 @@ function SettingsForm({ settings }: { settings: NotificationSettingsView }) {
   const [enabled, setEnabled] = useState<Record<string, boolean>>(() =>
     Object.fromEntries(settings.kinds.map(({ kind, enabled }) => [kind, enabled])),
   );
-  const [notice, setNotice] = useState<Notice | null>(null);
+  const showNotice = useShowNotice();
   const save = () => {
     const disabled = settings.kinds
       .map(({ kind }) => kind)
       .filter((kind): kind is NotificationKind => !enabled[kind]);
-    setNotice(null);
     update.mutate(
       { disabled },
       {
-        onSuccess: () => setNotice({ tone: 'success', text: 'Your choice of mails is saved.' }),
+        onSuccess: () => showNotice({ tone: 'success', text: 'Your choice of mails is saved.' }),
       },
     );
   };
@@ -51,7 +50,6 @@ function SettingsForm({ settings }: { settings: NotificationSettingsView }) {
             Save mail choices
           </Button>
         </Flex>
-        <LiveNotice notice={notice} />
       </Flex>
     </form>
   );

@@ -1,17 +1,17 @@
-import { Badge, Button, Flex, Heading, Text } from '@radix-ui/themes';
+import { Badge, Button, Flex, Text } from '@radix-ui/themes';
 import {
   outboxStates,
   type OutboxMessageView,
   type OutboxQuery,
   type OutboxState,
 } from '@skyledger/contracts';
-import { useState } from 'react';
 import { useNavigation, useSearchParams } from 'react-router-dom';
 import { CountTabNav } from '@/components/ui/count-tab-nav';
 import { DateTime } from '@/components/ui/date-time';
-import { LiveNotice, type Notice, type ShowNotice } from '@/components/ui/live-notice';
+import { useShowNotice, type ShowNotice } from '@/components/ui/toaster';
 import { PagePager } from '@/components/ui/page-pager';
 import { ScrollTable } from '@/components/ui/scroll-table';
+import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { errorMessage } from '@/lib/api-error-messages';
 import { outboxSearchParams, parseOutboxSearch, useOutbox } from '../api/get-outbox';
@@ -78,13 +78,17 @@ export function OutboxPage() {
   const query = parseOutboxSearch(searchParams);
   const { data } = useOutbox(query);
   const navigation = useNavigation();
-  const [notice, setNotice] = useState<Notice | null>(null);
+  const showNotice = useShowNotice();
   const busy =
     navigation.state === 'loading' && navigation.location.pathname === paths.app.outbox.path;
 
   const rows = data.items.map((message) => [
     outboxKindLabel(message.kind),
-    <span className="sl-break">{message.to}</span>,
+    // A narrow column breaks an address after its @, not in the middle of a name.
+    <>
+      {message.to.split('@')[0]}@<wbr />
+      {message.to.split('@').slice(1).join('@')}
+    </>,
     message.subject,
     <Badge color={outboxStateColors[message.state]} variant="soft" highContrast>
       {outboxStateLabels[message.state]}
@@ -100,24 +104,17 @@ export function OutboxPage() {
     ) : (
       <DateTime value={message.nextAttemptAt} />
     ),
-    <RetryButton message={message} onNotice={setNotice} />,
+    <RetryButton message={message} onNotice={showNotice} />,
   ]);
 
   return (
     <Flex direction="column" gap="5">
-      <Flex direction="column" gap="1">
-        <Heading as="h1" size="7">
-          Outbox
-        </Heading>
-        <Text color="gray" className="sl-prose">
-          Every mail the desk sends is queued here with the change it reports, then delivered with
-          retries. A failed mail waits until you retry it.
-        </Text>
-      </Flex>
+      <PageHeader
+        title="Outbox"
+        purpose="Every mail the desk sends is queued here with the change it reports, then delivered with retries. A failed mail waits until you retry it."
+      />
       <StateTabs query={query} counts={data.counts} />
-      {/* No gap for the notice's live region while it is empty. */}
-      <Flex direction="column" gap={notice ? '3' : '0'}>
-        <LiveNotice notice={notice} />
+      <Flex direction="column">
         <Flex direction="column" gap="3" aria-busy={busy} className={busy ? 'sl-busy' : undefined}>
           {data.total === 0 ? (
             <Text>

@@ -15,7 +15,11 @@ export const outboxStateColors = {
   failed: 'red',
 } as const satisfies Record<OutboxState, string>;
 
-const kindLabels: Record<NotificationKind | 'invitation' | 'password_reset', string> = {
+// The desk's own notifications, the account mails, and the mails to subscribed readers.
+type MailKind =
+  NotificationKind | 'invitation' | 'password_reset' | 'reader_confirm' | 'reader_update';
+
+const kindLabels: Record<MailKind, string> = {
   claim_assigned: 'Claim assigned',
   signoff_requested: 'Sign-off requested',
   sent_back: 'Verdict sent back',
@@ -24,6 +28,8 @@ const kindLabels: Record<NotificationKind | 'invitation' | 'password_reset', str
   scheduled_published: 'Scheduled publication done',
   invitation: 'Invitation to the desk',
   password_reset: 'Password reset',
+  reader_confirm: 'Reader subscription to confirm',
+  reader_update: 'Update to a reader',
 };
 
 /** What a mail is about, in words; a kind the desk does not know yet shows as stored. */

@@ -1,6 +1,6 @@
-import { AlertDialog, Button, Flex } from '@radix-ui/themes';
+import { Button } from '@radix-ui/themes';
 import type { UserListItem } from '@skyledger/contracts';
-import { useState } from 'react';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { useUpdateUser } from '../api/update-user';
 import { describeUserChangeError, type ShowNotice } from './people-notice';
 
@@ -11,7 +11,6 @@ interface AccountStatusDialogProps {
 
 /** Disable an active account or re-enable a disabled one, after a confirmation. */
 export function AccountStatusDialog({ user, onNotice }: AccountStatusDialogProps) {
-  const [open, setOpen] = useState(false);
   const updateUser = useUpdateUser();
   const disabling = user.status !== 'disabled';
   const copy = disabling
@@ -31,19 +30,9 @@ export function AccountStatusDialog({ user, onNotice }: AccountStatusDialogProps
         done: `${user.displayName} can sign in again.`,
       };
 
-  const confirm = () =>
-    updateUser.mutate(
-      { id: user.id, status: disabling ? 'disabled' : 'active', version: user.version },
-      {
-        onSuccess: () => onNotice({ tone: 'success', text: copy.done }),
-        onError: (error) => onNotice({ tone: 'problem', text: describeUserChangeError(error) }),
-        onSettled: () => setOpen(false),
-      },
-    );
-
   return (
-    <AlertDialog.Root open={open} onOpenChange={setOpen}>
-      <AlertDialog.Trigger>
+    <ConfirmDialog
+      trigger={
         <Button
           variant="soft"
           color={disabling ? 'red' : 'gray'}
@@ -53,26 +42,23 @@ export function AccountStatusDialog({ user, onNotice }: AccountStatusDialogProps
         >
           {copy.trigger}
         </Button>
-      </AlertDialog.Trigger>
-      <AlertDialog.Content maxWidth="460px">
-        <AlertDialog.Title>{copy.title}</AlertDialog.Title>
-        <AlertDialog.Description size="2">{copy.description}</AlertDialog.Description>
-        <Flex gap="3" mt="4" justify="end" wrap="wrap">
-          <AlertDialog.Cancel>
-            <Button variant="soft" color="gray" highContrast disabled={updateUser.isPending}>
-              Cancel
-            </Button>
-          </AlertDialog.Cancel>
-          <Button
-            color={disabling ? 'red' : undefined}
-            highContrast
-            loading={updateUser.isPending}
-            onClick={confirm}
-          >
-            {copy.confirm}
-          </Button>
-        </Flex>
-      </AlertDialog.Content>
-    </AlertDialog.Root>
+      }
+      title={copy.title}
+      description={copy.description}
+      keepLabel="Cancel"
+      confirmLabel={copy.confirm}
+      color={disabling ? 'red' : 'blue'}
+      maxWidth="460px"
+      describeError={describeUserChangeError}
+      onConfirm={() =>
+        updateUser
+          .mutateAsync({
+            id: user.id,
+            status: disabling ? 'disabled' : 'active',
+            version: user.version,
+          })
+          .then(() => onNotice({ tone: 'success', text: copy.done }))
+      }
+    />
   );
 }

@@ -1,10 +1,10 @@
-import { Box, Flex, Heading, Text } from '@radix-ui/themes';
+import { Box, Flex, Text } from '@radix-ui/themes';
 import type { UserSortField } from '@skyledger/contracts';
-import { useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { parseUsersSort, useUsers, type UsersSort } from '../api/get-users';
 import { InviteUserDialog } from './invite-user-dialog';
-import { PeopleNotice, type Notice } from './people-notice';
+import { useShowNotice } from '@/components/ui/toaster';
+import { PageHeader } from '@/components/ui/page-header';
 import { PeopleTable } from './people-table';
 
 // Dates read best newest first; names, e-mails, roles and statuses A to Z.
@@ -21,7 +21,7 @@ export function PeopleDirectory({ currentUserId }: { currentUserId: string }) {
   const [searchParams, setSearchParams] = useSearchParams();
   const sort = parseUsersSort(searchParams);
   const { data } = useUsers(sort);
-  const [notice, setNotice] = useState<Notice | null>(null);
+  const showNotice = useShowNotice();
 
   const sortBy = (field: UserSortField) => {
     const order = sort.sort === field ? (sort.order === 'asc' ? 'desc' : 'asc') : firstOrder[field];
@@ -30,19 +30,11 @@ export function PeopleDirectory({ currentUserId }: { currentUserId: string }) {
 
   return (
     <Flex direction="column" gap="5">
-      <Flex justify="between" align={{ initial: 'start', sm: 'end' }} gap="4" wrap="wrap">
-        <Flex direction="column" gap="1">
-          <Heading as="h1" size="7">
-            People
-          </Heading>
-          <Text color="gray">
-            {data.total === 1 ? '1 person' : `${data.total} people`} on the desk. Invite people,
-            change their roles, and disable accounts that should no longer sign in.
-          </Text>
-        </Flex>
-        <InviteUserDialog onNotice={setNotice} />
-      </Flex>
-      <PeopleNotice notice={notice} />
+      <PageHeader
+        title="People"
+        purpose={`${data.total === 1 ? '1 person' : `${data.total} people`} on the desk. Invite people, change their roles, and disable accounts that should no longer sign in.`}
+        action={<InviteUserDialog onNotice={showNotice} />}
+      />
       <Box display={{ initial: 'block', md: 'none' }}>
         <Text size="1" color="gray">
           The table scrolls sideways for role, status and actions.
@@ -53,7 +45,7 @@ export function PeopleDirectory({ currentUserId }: { currentUserId: string }) {
         sort={sort}
         onSort={sortBy}
         currentUserId={currentUserId}
-        onNotice={setNotice}
+        onNotice={showNotice}
       />
     </Flex>
   );

@@ -1,7 +1,6 @@
 import { changeErrorMessage } from '@/lib/api-error-messages';
 
-export type { Notice, ShowNotice } from '@/components/ui/live-notice';
-export { LiveNotice as PeopleNotice } from '@/components/ui/live-notice';
+export type { ShowNotice } from '@/components/ui/toaster';
 
 export const staleUserMessage = 'Someone else changed this person — reloaded.';
 

@@ -6,7 +6,7 @@ import {
   type UserStatus,
 } from '@skyledger/contracts';
 import { AccountStatusDialog } from './account-status-dialog';
-import { formatDate } from '@/lib/format-date';
+import { DateTime } from '@/components/ui/date-time';
 import type { ShowNotice } from './people-notice';
 import { ResendInvitationButton } from './resend-invitation-button';
 import { RoleSelect } from './role-select';
@@ -51,11 +51,11 @@ export function UserRow({ user, isCurrentUser, onNotice }: UserRowProps) {
         </Badge>
       </Table.Cell>
       <Table.Cell>
-        <time dateTime={user.createdAt}>{formatDate(user.createdAt)}</time>
+        <DateTime value={user.createdAt} show="date" />
       </Table.Cell>
       <Table.Cell>
         {user.lastSignInAt ? (
-          <time dateTime={user.lastSignInAt}>{formatDate(user.lastSignInAt)}</time>
+          <DateTime value={user.lastSignInAt} show="date" />
         ) : (
           <Text color="gray">Never</Text>
         )}

@@ -8,13 +8,13 @@ import {
 } from '@skyledger/contracts';
 import { Controller } from 'react-hook-form';
 import { ControlledSelect } from '@/components/ui/controlled-select';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { ZonedDateTimeField } from '@/components/ui/zoned-date-time-field';
 import { FormDialog } from '@/features/claims/components/shared/form-dialog';
 import { useFormDialog } from '@/features/claims/components/shared/use-form-dialog';
 import { staleClaimMoveMessage } from '@/features/verdicts/verdict-words';
-import { browserTimeZone } from '@/lib/zoned-time';
+import { useDeskTimeZone } from '@/lib/desk-time-zone';
 import { usePublishClaim } from '../api/publish-claim';
 import {
   emptyPublishForm,
@@ -49,15 +49,16 @@ function noticeOf(publications: PublicationView[], scheduled: boolean): string {
 
 /**
  * Publish the cleared version now, or schedule it: a time typed on a clock in a chosen
- * zone (the browser's by default). The dialog is the confirmation; an explainer published
+ * zone (the desk's by default). The dialog is the confirmation; an explainer published
  * before goes out only with an update note saying what changed.
  */
 export function PublishDialog({ claim, scheduled, needsNote, onNotice }: PublishDialogProps) {
   const publish = usePublishClaim(claim.id);
+  const deskTimeZone = useDeskTimeZone();
   const options = { scheduled, needsNote };
   const { form, dialog } = useFormDialog({
     schema: publishFormSchema(options),
-    initial: () => emptyPublishForm(browserTimeZone()),
+    initial: () => emptyPublishForm(deskTimeZone),
     send: (values) => publish.mutateAsync(toPublishRequest(values, options, claim.version)),
     onSent: (publications) =>
       onNotice({ tone: 'success', text: noticeOf(publications, scheduled) }),

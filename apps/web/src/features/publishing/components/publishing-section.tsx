@@ -10,14 +10,15 @@ import {
   VisuallyHidden,
 } from '@radix-ui/themes';
 import type { ClaimDetail, CurrentUser, PublicationView } from '@skyledger/contracts';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { useTransitionClaim } from '@/features/claims/api/transition-claim';
+import { refusalMessage } from '@/features/verdicts/verdict-words';
 import { errorMessage } from '@/lib/api-error-messages';
 import { useCancelSchedule } from '../api/cancel-schedule';
 import { usePublications } from '../api/get-publications';
 import { mayPublish, mayStartCorrection } from '../publishing-permissions';
 import { inItsZone, readerPageUrl } from '../publishing-words';
-import { ConfirmDialog } from './confirm-dialog';
 import { PublicationsList } from './publications-list';
 import { PublishDialog } from './publish-dialog';
 
@@ -68,6 +69,7 @@ function ScheduledCallout({
       {mayCancel ? (
         <Flex mt="2">
           <ConfirmDialog
+            describeError={refusalMessage}
             trigger={
               <Button variant="soft" color="red" highContrast>
                 Cancel the schedule
@@ -103,6 +105,7 @@ function StartCorrection({ claim, onNotice }: { claim: ClaimDetail; onNotice: Sh
         cleared and published with an update note.
       </Text>
       <ConfirmDialog
+        describeError={refusalMessage}
         trigger={<Button highContrast>Start a correction</Button>}
         title="Start a correction?"
         description="The claim goes back into research, where a new verdict version is drafted, signed off and published with a dated update note. Until then readers keep seeing the explainer as it was published."

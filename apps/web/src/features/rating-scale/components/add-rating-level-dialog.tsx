@@ -2,7 +2,7 @@ import { PlusIcon } from '@radix-ui/react-icons';
 import { Button, Grid } from '@radix-ui/themes';
 import { Controller } from 'react-hook-form';
 import { CheckboxField } from '@/components/ui/checkbox-field';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { TextInputField } from '@/components/ui/text-input-field';
 import { FormDialog } from '@/features/claims/components/shared/form-dialog';
 import { useFormDialog } from '@/features/claims/components/shared/use-form-dialog';

@@ -1,7 +1,7 @@
 import { Button, Text } from '@radix-ui/themes';
 import type { RatingLevelView } from '@skyledger/contracts';
-import type { ShowNotice } from '@/components/ui/live-notice';
-import { ConfirmDialog } from '@/features/publishing/components/confirm-dialog';
+import type { ShowNotice } from '@/components/ui/toaster';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { useDeleteRatingLevel } from '../api/delete-rating-level';
 
 interface DeleteRatingLevelDialogProps {

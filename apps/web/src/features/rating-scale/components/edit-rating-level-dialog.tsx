@@ -1,6 +1,6 @@
 import { Button } from '@radix-ui/themes';
 import type { RatingLevelView } from '@skyledger/contracts';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { FormDialog } from '@/features/claims/components/shared/form-dialog';
 import { useFormDialog } from '@/features/claims/components/shared/use-form-dialog';
 import { useUpdateRatingLevel } from '../api/update-rating-level';

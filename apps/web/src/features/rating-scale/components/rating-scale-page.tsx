@@ -1,7 +1,7 @@
 import { Badge, Card, Code, Flex, Heading, Text } from '@radix-ui/themes';
 import type { RatingLevelView } from '@skyledger/contracts';
-import { useState } from 'react';
-import { LiveNotice, type Notice, type ShowNotice } from '@/components/ui/live-notice';
+import { PageHeader } from '@/components/ui/page-header';
+import { useShowNotice, type ShowNotice } from '@/components/ui/toaster';
 import { ratingLevelName, useRatingLevels } from '../api/get-rating-levels';
 import { AddRatingLevelDialog } from './add-rating-level-dialog';
 import { DeleteRatingLevelDialog } from './delete-rating-level-dialog';
@@ -57,31 +57,19 @@ function RatingLevelItem({ level, mayEdit, onNotice }: RatingLevelItemProps) {
 /** The desk's rating scale: everyone reads it, a desk chief words it. */
 export function RatingScalePage({ mayEdit }: { mayEdit: boolean }) {
   const { data: levels } = useRatingLevels();
-  const [notice, setNotice] = useState<Notice | null>(null);
+  const showNotice = useShowNotice();
   return (
     <Flex direction="column" gap="5" maxWidth="820px">
-      <Flex justify="between" align={{ initial: 'start', sm: 'end' }} gap="4" wrap="wrap">
-        <Flex direction="column" gap="1">
-          <Heading as="h1" size="7">
-            Rating scale
-          </Heading>
-          <Text color="gray" className="sl-prose">
-            The words every verdict is rated in, from what holds up best to what the evidence
-            contradicts, and the outcomes that are not ratings.
-            {mayEdit
-              ? ' You may reword a level, add one, or delete one no verdict uses.'
-              : ' A desk chief words the scale.'}
-          </Text>
-        </Flex>
-        {mayEdit ? <AddRatingLevelDialog onNotice={setNotice} /> : null}
-      </Flex>
-      {/* No gap for the notice's live region while it is empty. */}
-      <Flex direction="column" gap={notice ? '4' : '0'}>
-        <LiveNotice notice={notice} />
+      <PageHeader
+        title="Rating scale"
+        purpose={`The words every verdict is rated in, from what holds up best to what the evidence contradicts, and the outcomes that are not ratings. Readers see the same words on the methodology page.${mayEdit ? ' You may reword a level, add one, or delete one no verdict uses.' : ' A desk chief words the scale.'}`}
+        action={mayEdit ? <AddRatingLevelDialog onNotice={showNotice} /> : null}
+      />
+      <Flex direction="column">
         <ol className="sl-card-list" aria-label="Levels of the scale">
           {levels.map((level) => (
             <li key={level.id}>
-              <RatingLevelItem level={level} mayEdit={mayEdit} onNotice={setNotice} />
+              <RatingLevelItem level={level} mayEdit={mayEdit} onNotice={showNotice} />
             </li>
           ))}
         </ol>

@@ -1,8 +1,7 @@
 import { UpdateIcon } from '@radix-ui/react-icons';
 import { Button, Flex } from '@radix-ui/themes';
 import type { SearchReindexResponse } from '@skyledger/contracts';
-import { useState } from 'react';
-import { LiveNotice, type Notice } from '@/components/ui/live-notice';
+import { useShowNotice } from '@/components/ui/toaster';
 import { errorMessage } from '@/lib/api-error-messages';
 import { useReindexSearch } from '../api/reindex-search';
 
@@ -16,7 +15,7 @@ function describeRebuild({ documents, milliseconds }: SearchReindexResponse): st
 /** The desk chief's rebuild of the search index from the database, with what it did. */
 export function ReindexButton() {
   const reindex = useReindexSearch();
-  const [notice, setNotice] = useState<Notice | null>(null);
+  const showNotice = useShowNotice();
   return (
     <Flex direction="column" gap="2" align={{ initial: 'start', sm: 'end' }}>
       <Button
@@ -25,17 +24,15 @@ export function ReindexButton() {
         highContrast
         loading={reindex.isPending}
         onClick={() => {
-          setNotice(null);
           reindex.mutate(undefined, {
-            onSuccess: (result) => setNotice({ tone: 'success', text: describeRebuild(result) }),
-            onError: (error) => setNotice({ tone: 'problem', text: errorMessage(error) }),
+            onSuccess: (result) => showNotice({ tone: 'success', text: describeRebuild(result) }),
+            onError: (error) => showNotice({ tone: 'problem', text: errorMessage(error) }),
           });
         }}
       >
         <UpdateIcon aria-hidden />
         Rebuild the index
       </Button>
-      <LiveNotice notice={notice} />
     </Flex>
   );
 }

@@ -1,4 +1,4 @@
-import { Flex, Heading, Text } from '@radix-ui/themes';
+import { Flex, Text } from '@radix-ui/themes';
 import type { Role } from '@skyledger/contracts';
 import { useSearchParams } from 'react-router-dom';
 import {
@@ -11,6 +11,7 @@ import {
 import { ReindexButton } from './reindex-button';
 import { SearchForm } from './search-form';
 import { SearchResults } from './search-results';
+import { PageHeader } from '@/components/ui/page-header';
 
 /** The desk's search: words, dates and facets, all held in the URL so a search can be shared. */
 export function SearchPage({ role }: { role: Role }) {
@@ -21,17 +22,11 @@ export function SearchPage({ role }: { role: Role }) {
 
   return (
     <Flex direction="column" gap="5">
-      <Flex justify="between" align={{ initial: 'start', sm: 'end' }} gap="4" wrap="wrap">
-        <Flex direction="column" gap="1">
-          <Heading as="h1" size="7">
-            Search
-          </Heading>
-          <Text color="gray">
-            Claims and sources across the whole desk. Share the address of any search.
-          </Text>
-        </Flex>
-        {role === 'desk_chief' ? <ReindexButton /> : null}
-      </Flex>
+      <PageHeader
+        title="Search"
+        purpose="Find claims and sources across the whole desk by their words, even with a typo, before you file or research one again. Share the address of any search."
+        action={role === 'desk_chief' ? <ReindexButton /> : null}
+      />
       {/* A new search from the URL (back, a shared link) starts the form afresh. */}
       <SearchForm key={`${view.q}|${view.from}|${view.to}`} view={view} onSearch={show} />
       {isSearchable(view) ? (

@@ -14,7 +14,7 @@ import { ControlledSelect } from '@/components/ui/controlled-select';
 import { DateTime } from '@/components/ui/date-time';
 import { FormError } from '@/components/ui/form-error';
 import { LeaveGuard } from '@/components/ui/leave-guard';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { ratingLevelName, useRatingLevels } from '@/features/rating-scale/api/get-rating-levels';
 import { isApiError } from '@/lib/api-client';

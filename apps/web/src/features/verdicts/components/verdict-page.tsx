@@ -5,11 +5,10 @@ import type {
   CurrentUser,
   VerdictVersionView,
 } from '@skyledger/contracts';
-import { useState } from 'react';
 import { AppLink } from '@/components/ui/app-link';
 import { DocumentTitle } from '@/components/ui/document-title';
 import { FormError } from '@/components/ui/form-error';
-import { LiveNotice, type Notice, type ShowNotice } from '@/components/ui/live-notice';
+import { useShowNotice, type ShowNotice } from '@/components/ui/toaster';
 import { paths } from '@/config/paths';
 import { useClaim } from '@/features/claims/api/get-claim';
 import { hasClaimRole } from '@/features/claims/claim-permissions';
@@ -124,15 +123,17 @@ export function VerdictPage({ claimId, user }: { claimId: string; user: CurrentU
   const { data: claim } = useClaim(claimId);
   const { data: verdict } = useClaimVerdict(claimId);
   const onHand = useWorkingsOnHand(claimId);
-  const [notice, setNotice] = useState<Notice | null>(null);
+  const showNotice = useShowNotice();
   const evidence: ExplainerEvidence = { claimId, sources: claim.sources, ...onHand };
   return (
     <Flex direction="column" gap="5">
       <DocumentTitle title={`Verdict: ${claim.summary}`} />
-      <ClaimVerdictHeader claim={claim} title="Verdict" />
-      {/* No gap for the notice's live region while it is empty. */}
-      <Flex direction="column" gap={notice ? '4' : '0'}>
-        <LiveNotice notice={notice} />
+      <ClaimVerdictHeader
+        claim={claim}
+        title="Verdict"
+        purpose="Rate the claim, write the bottom line and the explainer readers will see, with workings and sources from the claim. Each submitted version goes to the copy desk for sign-off."
+      />
+      <Flex direction="column">
         <Grid columns={{ initial: '1', md: 'minmax(0, 2fr) minmax(0, 1fr)' }} gap="5" align="start">
           <Flex direction="column" gap="6" minWidth="0">
             <ExplainerEvidenceProvider value={evidence}>
@@ -141,7 +142,7 @@ export function VerdictPage({ claimId, user }: { claimId: string; user: CurrentU
                 verdict={verdict}
                 evidence={evidence}
                 user={user}
-                onNotice={setNotice}
+                onNotice={showNotice}
               />
             </ExplainerEvidenceProvider>
             <VersionHistory verdict={verdict} />

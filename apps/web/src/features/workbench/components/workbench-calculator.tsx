@@ -3,6 +3,7 @@ import type { CalculatorInfo, WorksheetLineResult } from '@skyledger/calc';
 import type { Role } from '@skyledger/contracts';
 import { useId, useState } from 'react';
 import { AppLink } from '@/components/ui/app-link';
+import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { hasClaimRole } from '@/features/claims/claim-permissions';
 import { initialFormState, type FieldState, type FormState } from '../form/form-state';
@@ -60,21 +61,19 @@ export function WorkbenchCalculator({
 
   return (
     <Flex direction="column" gap="5">
-      <Flex direction="column" gap="2">
-        <AppLink
-          to={paths.app.workbench.getHref(undefined, claimId ?? undefined)}
-          size="2"
-          highContrast
-        >
-          All calculators
-        </AppLink>
-        <Heading as="h1" size="7">
-          {calculator.title}
-        </Heading>
-        <Text as="p" color="gray" className="sl-prose">
-          {calculator.summary}
-        </Text>
-      </Flex>
+      <PageHeader
+        above={
+          <AppLink
+            to={paths.app.workbench.getHref(undefined, claimId ?? undefined)}
+            size="2"
+            highContrast
+          >
+            All calculators
+          </AppLink>
+        }
+        title={calculator.title}
+        purpose={calculator.summary}
+      />
       <Grid columns={{ initial: '1', md: wide ? '1' : '2' }} gap="5" align="start">
         <Card asChild size="3">
           <section aria-labelledby={inputsHeadingId}>

@@ -1,7 +1,9 @@
-import { Callout, Flex, Heading, Spinner, Text } from '@radix-ui/themes';
-import { useState } from 'react';
-import { LiveNotice, type Notice } from '@/components/ui/live-notice';
+import { Button, Callout, Flex, Heading, Spinner, Text } from '@radix-ui/themes';
+import { Link as RouterLink } from 'react-router-dom';
+import { useShowNotice } from '@/components/ui/toaster';
+import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/features/auth/current-user';
+import { hasClaimRole } from '@/features/claims/claim-permissions';
 import { errorMessage } from '@/lib/api-error-messages';
 import { useCalculators } from '../api/get-calculators';
 import { useClaimWorkings } from '../api/get-claim-workings';
@@ -16,22 +18,32 @@ export function ClaimWorkings({ claimId }: { claimId: string }) {
   const workings = useClaimWorkings(claimId);
   // Titles and labels only; a working still shows, by its ids, if these fail to load.
   const catalogue = useCalculators();
-  const [notice, setNotice] = useState<Notice | null>(null);
+  const showNotice = useShowNotice();
   const calculatorOf = (id: string) =>
     catalogue.data?.calculators.find((calculator) => calculator.id === id);
 
+  const mayRun = hasClaimRole(user.role, 'research');
+
   return (
     <Flex direction="column" gap="4">
-      <Flex direction="column" gap="1">
-        <Heading as="h2" size="5">
-          Workings
-        </Heading>
-        <Text size="2" color="gray">
-          Back-of-envelope checks run on this claim. The server computes every result from the
-          inputs alone; these are estimates with the limits shown, not climate model output.
-        </Text>
+      <Flex justify="between" align="start" gap="3" wrap="wrap">
+        <Flex direction="column" gap="1" maxWidth="640px">
+          <Heading as="h2" size="5">
+            Workings
+          </Heading>
+          <Text size="2" color="gray">
+            Back-of-envelope checks run on this claim. The server computes every result from the
+            inputs alone; these are estimates with the limits shown, not climate model output.
+          </Text>
+        </Flex>
+        {mayRun ? (
+          <Button asChild highContrast>
+            <RouterLink to={paths.app.workbench.getHref(undefined, claimId)}>
+              Run a calculator for this claim
+            </RouterLink>
+          </Button>
+        ) : null}
       </Flex>
-      <LiveNotice notice={notice} />
       {workings.isPending || catalogue.isPending ? (
         <Flex align="center" gap="3" role="status">
           <Spinner />
@@ -42,7 +54,10 @@ export function ClaimWorkings({ claimId }: { claimId: string }) {
           <Callout.Text>{errorMessage(workings.error)}</Callout.Text>
         </Callout.Root>
       ) : workings.data.length === 0 ? (
-        <Text color="gray">No workings on this claim yet.</Text>
+        <Text color="gray">
+          No workings on this claim yet.
+          {mayRun ? ' Run a calculator in the workbench and save its result here.' : ''}
+        </Text>
       ) : (
         <ul className="sl-card-list sl-workings" aria-label="Workings, oldest first">
           {workings.data.map((working) => (
@@ -52,7 +67,7 @@ export function ClaimWorkings({ claimId }: { claimId: string }) {
                 working={working}
                 calculator={calculatorOf(working.calculatorId)}
                 user={user}
-                onNotice={setNotice}
+                onNotice={showNotice}
               />
             </li>
           ))}

@@ -4,7 +4,7 @@ import type { CurrentUser, WorkingView } from '@skyledger/contracts';
 import type { ReactNode } from 'react';
 import { AppLink } from '@/components/ui/app-link';
 import { DateTime } from '@/components/ui/date-time';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { paths } from '@/config/paths';
 import { hasClaimRole, mayChangePart } from '@/features/claims/claim-permissions';
 import { RemoveWorkingDialog } from './remove-working-dialog';

@@ -2,7 +2,7 @@ import { Button, Flex, Text } from '@radix-ui/themes';
 import { roleLabels, type ClaimDetail, type CurrentUser } from '@skyledger/contracts';
 import { useState } from 'react';
 import { SelectField } from '@/components/ui/select-field';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { useDeskPeople } from '@/features/people/api/get-desk-people';
 import { changeErrorMessage } from '@/lib/api-error-messages';
 import { useAssignClaim } from '../../api/assign-claim';

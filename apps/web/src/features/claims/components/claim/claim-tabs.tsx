@@ -1,7 +1,7 @@
 import { Box, Tabs } from '@radix-ui/themes';
 import type { ClaimDetail, CurrentUser } from '@skyledger/contracts';
 import { useLocation, useNavigate } from 'react-router-dom';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { PublishingSection } from '@/features/publishing/components/publishing-section';
 import { AppearancesSection } from './appearances/appearances-section';
 import { CommentsSection } from './comments/comments-section';

@@ -7,7 +7,7 @@ import {
 } from '@skyledger/contracts';
 import { z } from 'zod';
 import { ControlledSelect } from '@/components/ui/controlled-select';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { useTransitionClaim } from '../../api/transition-claim';
 import { optionalText } from '../../forms/form-rules';

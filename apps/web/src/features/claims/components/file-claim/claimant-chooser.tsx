@@ -1,5 +1,6 @@
 import { Button, Card, Flex, Grid, Text } from '@radix-ui/themes';
 import { claimantKindLabels, claimantKinds } from '@skyledger/contracts';
+import { useEffect, useRef } from 'react';
 import { useFormContext, useWatch } from 'react-hook-form';
 import { ControlledSelect } from '@/components/ui/controlled-select';
 import { TextAreaField } from '@/components/ui/text-area-field';
@@ -18,10 +19,22 @@ export function ClaimantChooser() {
     formState: { errors },
   } = useFormContext<FileClaimForm>();
   const [mode, picked] = useWatch({ control, name: ['claimantMode', 'picked'] });
+  // The button that switched the mode is gone: focus goes on to the first field that came.
+  const container = useRef<HTMLDivElement>(null);
+  const switched = useRef(false);
+  useEffect(() => {
+    if (!switched.current) return;
+    switched.current = false;
+    container.current?.querySelector<HTMLElement>('input, textarea')?.focus();
+  }, [mode]);
+  const switchTo = (next: FileClaimForm['claimantMode']) => {
+    switched.current = true;
+    setValue('claimantMode', next);
+  };
 
   if (mode === 'new') {
     return (
-      <Flex direction="column" gap="4">
+      <Flex direction="column" gap="4" ref={container}>
         <Grid columns={{ initial: '1', sm: '2' }} gap="4">
           <TextInputField
             label="Claimant's name"
@@ -57,7 +70,7 @@ export function ClaimantChooser() {
             variant="soft"
             color="gray"
             highContrast
-            onClick={() => setValue('claimantMode', 'existing')}
+            onClick={() => switchTo('existing')}
           >
             Find a claimant the desk knows instead
           </Button>
@@ -67,7 +80,7 @@ export function ClaimantChooser() {
   }
 
   return (
-    <Flex direction="column" gap="3">
+    <Flex direction="column" gap="3" ref={container}>
       {picked ? (
         <Card>
           <Flex justify="between" align="center" gap="3" wrap="wrap">
@@ -106,7 +119,7 @@ export function ClaimantChooser() {
           variant="soft"
           color="gray"
           highContrast
-          onClick={() => setValue('claimantMode', 'new')}
+          onClick={() => switchTo('new')}
         >
           Someone new: describe the claimant
         </Button>

@@ -1,17 +1,18 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Button, Card, Flex, Heading, Text } from '@radix-ui/themes';
+import { Box, Button, Card, Flex, Heading, Text } from '@radix-ui/themes';
 import { useState } from 'react';
 import { Controller, FormProvider, useForm, useWatch } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';
 import { FileField } from '@/components/ui/file-field';
 import { FormError } from '@/components/ui/form-error';
+import { ProgressLine } from '@/components/ui/progress-line';
+import { useShowNotice } from '@/components/ui/toaster';
 import { paths } from '@/config/paths';
 import { changeErrorMessage } from '@/lib/api-error-messages';
 import { formatBytes } from '@/lib/format-bytes';
+import { useDeskTimeZone } from '@/lib/desk-time-zone';
 import { applyApiError } from '@/lib/form-errors';
-import { browserTimeZone } from '@/lib/zoned-time';
 import { useFileClaim, type FilingStage } from '../../api/file-claim-with-capture';
-import type { ClaimPageState } from '../../claim-page-state';
 import { evidenceFileAccept, evidenceFileHint } from '../../forms/evidence-file';
 import {
   emptyFileClaimForm,
@@ -38,9 +39,12 @@ export function FileClaimForm() {
   const navigate = useNavigate();
   const filing = useFileClaim();
   const [stage, setStage] = useState<FilingStage | null>(null);
+  const [sent, setSent] = useState<number>();
+  const deskTimeZone = useDeskTimeZone();
+  const showNotice = useShowNotice();
   const form = useForm<FormValues, unknown, FileClaimValues>({
     resolver: zodResolver(fileClaimFormSchema),
-    defaultValues: emptyFileClaimForm(browserTimeZone()),
+    defaultValues: emptyFileClaimForm(deskTimeZone),
   });
   const {
     control,
@@ -57,20 +61,19 @@ export function FileClaimForm() {
         body: toCreateClaimRequest(values),
         capture: values.capture,
         onStage: setStage,
+        onProgress: setSent,
       })
       .then(
         ({ claim, captureError }) => {
-          const state: ClaimPageState = {
-            notice: captureError
+          showNotice(
+            captureError
               ? {
                   tone: 'problem',
                   text: `The claim is filed, but its capture was not attached: ${changeErrorMessage(captureError, 'The appearance changed meanwhile.')} Add the capture again under Appearances.`,
                 }
               : { tone: 'success', text: 'The claim is filed.' },
-          };
-          navigate(paths.app.claim.getHref(claim.id, captureError ? 'appearances' : undefined), {
-            state,
-          });
+          );
+          navigate(paths.app.claim.getHref(claim.id, captureError ? 'appearances' : undefined));
         },
         (error: unknown) => {
           setStage(null);
@@ -143,9 +146,14 @@ export function FileClaimForm() {
             <Button type="submit" size="3" highContrast loading={isSubmitting}>
               File the claim
             </Button>
-            <Text role="status" size="2" color="gray">
-              {isSubmitting && stage ? stageWords[stage] : ''}
-            </Text>
+            <Box role="status" flexGrow="1">
+              {isSubmitting && stage ? (
+                <ProgressLine
+                  label={stageWords[stage]}
+                  fraction={stage === 'uploading' ? sent : undefined}
+                />
+              ) : null}
+            </Box>
           </Flex>
         </Flex>
       </form>

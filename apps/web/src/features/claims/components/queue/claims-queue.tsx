@@ -1,5 +1,5 @@
 import { PlusIcon } from '@radix-ui/react-icons';
-import { Button, Flex, Heading, Text } from '@radix-ui/themes';
+import { Button, Flex } from '@radix-ui/themes';
 import type { ClaimQueueQuery, CurrentUser } from '@skyledger/contracts';
 import { useState } from 'react';
 import { Link as RouterLink, useNavigation, useSearchParams } from 'react-router-dom';
@@ -16,6 +16,7 @@ import { QueueEmpty } from './queue-empty';
 import { QueueFilters } from './queue-filters';
 import { QueueStatusTabs } from './queue-status-tabs';
 import { QueueTable } from './queue-table';
+import { PageHeader } from '@/components/ui/page-header';
 
 /** The queue: status tabs, filters, the table and its pages, all read from and kept in the URL. */
 export function ClaimsQueue({ user }: { user: CurrentUser }) {
@@ -37,25 +38,20 @@ export function ClaimsQueue({ user }: { user: CurrentUser }) {
 
   return (
     <Flex direction="column" gap="5">
-      <Flex justify="between" align={{ initial: 'start', sm: 'end' }} gap="4" wrap="wrap">
-        <Flex direction="column" gap="1">
-          <Heading as="h1" size="7">
-            Claims
-          </Heading>
-          <Text color="gray">
-            The desk&apos;s queue. Filter it, sort it by a column, and share the address of any
-            view.
-          </Text>
-        </Flex>
-        {mayFile ? (
-          <Button asChild highContrast>
-            <RouterLink to={paths.app.fileClaim.getHref()}>
-              <PlusIcon aria-hidden />
-              File a claim
-            </RouterLink>
-          </Button>
-        ) : null}
-      </Flex>
+      <PageHeader
+        title="Claims"
+        purpose="Every claim on the desk and where it stands in its life, from filed to published. Filter it, sort it by a column, and share the address of any view."
+        action={
+          mayFile ? (
+            <Button asChild highContrast>
+              <RouterLink to={paths.app.fileClaim.getHref()}>
+                <PlusIcon aria-hidden />
+                File a claim
+              </RouterLink>
+            </Button>
+          ) : null
+        }
+      />
       <QueueStatusTabs query={query} counts={data.counts} />
       <QueueFilters
         key={queueSearchParams({

@@ -1,4 +1,4 @@
-import { Badge, Flex, Table, Text, VisuallyHidden } from '@radix-ui/themes';
+import { Badge, Box, Flex, Table, Text, VisuallyHidden } from '@radix-ui/themes';
 import {
   claimantKindLabels,
   claimSortFields,
@@ -22,7 +22,8 @@ import { DateTime } from '@/components/ui/date-time';
 import { SortableColumnHeader } from '@/components/ui/sortable-column-header';
 import { paths } from '@/config/paths';
 import { firstOrder, queueDefaults } from '../../api/queue-search';
-import { ClaimStatusBadge } from '../claim-status-badge';
+import { ClaimStatusBadge, LegalReviewBadge } from '../claim-status-badge';
+import { QueueCards } from './queue-cards';
 import { QueuePager } from './queue-pager';
 
 const features = tableFeatures({ rowSortingFeature, rowPaginationFeature });
@@ -38,11 +39,7 @@ const columns = column.columns([
         <AppLink to={paths.app.claim.getHref(row.original.id)} weight="bold">
           {row.original.summary}
         </AppLink>
-        {row.original.legalReview ? (
-          <Badge color="red" variant="soft" highContrast>
-            Legal review
-          </Badge>
-        ) : null}
+        <LegalReviewBadge flagged={row.original.legalReview} />
       </Flex>
     ),
   }),
@@ -157,52 +154,58 @@ export function QueueTable({ items, total, query, onChange }: QueueTableProps) {
   const sortedBy = sorting[0];
   return (
     <Flex direction="column" gap="3">
-      <Table.Root variant="surface" className="sl-queue-table">
-        <VisuallyHidden asChild>
-          <caption>
-            Claims in the queue, sorted by{' '}
-            {String(table.getColumn(sortedBy?.id ?? 'filedAt')?.columnDef.header ?? 'Filed')},{' '}
-            {sortedBy?.desc ? 'descending' : 'ascending'}
-          </caption>
-        </VisuallyHidden>
-        <Table.Header>
-          {table.getHeaderGroups().map((group) => (
-            <Table.Row key={group.id}>
-              {group.headers.map((header) =>
-                sortable.has(header.column.id) ? (
-                  <SortableColumnHeader
-                    key={header.id}
-                    label={String(header.column.columnDef.header)}
-                    sorted={header.column.getIsSorted()}
-                    onSort={() => header.column.toggleSorting()}
-                  />
-                ) : (
-                  <Table.ColumnHeaderCell key={header.id}>
-                    <table.FlexRender header={header} />
-                  </Table.ColumnHeaderCell>
-                ),
-              )}
-            </Table.Row>
-          ))}
-        </Table.Header>
-        <Table.Body>
-          {table.getRowModel().rows.map((row) => (
-            <Table.Row key={row.id}>
-              {row.getAllCells().map((cell) =>
-                cell.column.id === 'summary' ? (
-                  <Table.RowHeaderCell key={cell.id} className="sl-queue-summary">
-                    <table.FlexRender cell={cell} />
-                  </Table.RowHeaderCell>
-                ) : (
-                  <Table.Cell key={cell.id}>
-                    <table.FlexRender cell={cell} />
-                  </Table.Cell>
-                ),
-              )}
-            </Table.Row>
-          ))}
-        </Table.Body>
-      </Table.Root>
+      {/* A phone gets the claims as cards, the same facts stacked, rather than a wide table. */}
+      <Box display={{ initial: 'block', md: 'none' }}>
+        <QueueCards items={items} query={query} onChange={onChange} />
+      </Box>
+      <Box display={{ initial: 'none', md: 'block' }}>
+        <Table.Root variant="surface" className="sl-queue-table">
+          <VisuallyHidden asChild>
+            <caption>
+              Claims in the queue, sorted by{' '}
+              {String(table.getColumn(sortedBy?.id ?? 'filedAt')?.columnDef.header ?? 'Filed')},{' '}
+              {sortedBy?.desc ? 'descending' : 'ascending'}
+            </caption>
+          </VisuallyHidden>
+          <Table.Header>
+            {table.getHeaderGroups().map((group) => (
+              <Table.Row key={group.id}>
+                {group.headers.map((header) =>
+                  sortable.has(header.column.id) ? (
+                    <SortableColumnHeader
+                      key={header.id}
+                      label={String(header.column.columnDef.header)}
+                      sorted={header.column.getIsSorted()}
+                      onSort={() => header.column.toggleSorting()}
+                    />
+                  ) : (
+                    <Table.ColumnHeaderCell key={header.id}>
+                      <table.FlexRender header={header} />
+                    </Table.ColumnHeaderCell>
+                  ),
+                )}
+              </Table.Row>
+            ))}
+          </Table.Header>
+          <Table.Body>
+            {table.getRowModel().rows.map((row) => (
+              <Table.Row key={row.id}>
+                {row.getAllCells().map((cell) =>
+                  cell.column.id === 'summary' ? (
+                    <Table.RowHeaderCell key={cell.id} className="sl-queue-summary">
+                      <table.FlexRender cell={cell} />
+                    </Table.RowHeaderCell>
+                  ) : (
+                    <Table.Cell key={cell.id}>
+                      <table.FlexRender cell={cell} />
+                    </Table.Cell>
+                  ),
+                )}
+              </Table.Row>
+            ))}
+          </Table.Body>
+        </Table.Root>
+      </Box>
       <QueuePager
         total={total}
         pagination={pagination}

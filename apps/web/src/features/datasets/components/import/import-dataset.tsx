@@ -7,10 +7,11 @@ import { useNavigate } from 'react-router-dom';
 import { FormError } from '@/components/ui/form-error';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextInputField } from '@/components/ui/text-input-field';
+import { useShowNotice } from '@/components/ui/toaster';
 import { paths } from '@/config/paths';
 import { applyApiError } from '@/lib/form-errors';
 import { useCreateDataset } from '../../api/create-dataset';
-import { importedNotice } from '../../dataset-page-state';
+import { importedMessage } from '../../imported-message';
 import {
   columnChoicesFor,
   emptyImportDatasetForm,
@@ -35,6 +36,7 @@ const sameColumns = (a: readonly string[], b: readonly string[]) =>
  */
 export function ImportDataset() {
   const navigate = useNavigate();
+  const showNotice = useShowNotice();
   const create = useCreateDataset();
   const [upload, setUpload] = useState<DatasetUploadView | null>(null);
   const [problems, setProblems] = useState<RowProblem[]>([]);
@@ -67,8 +69,10 @@ export function ImportDataset() {
     if (!upload) return;
     setProblems([]);
     return create.mutateAsync(toCreateDatasetRequest(values, upload.attachment.id)).then(
-      (dataset) =>
-        navigate(paths.app.dataset.getHref(dataset.id), { state: importedNotice(dataset) }),
+      (dataset) => {
+        showNotice({ tone: 'success', text: importedMessage(dataset) });
+        navigate(paths.app.dataset.getHref(dataset.id));
+      },
       (error: unknown) => {
         const found = rowProblemsOf(error);
         if (found.length > 0) return setProblems(found);

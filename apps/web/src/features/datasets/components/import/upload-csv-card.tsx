@@ -1,8 +1,9 @@
 import { UploadIcon } from '@radix-ui/react-icons';
-import { Button, Card, Flex, Heading, Text } from '@radix-ui/themes';
+import { Box, Button, Card, Flex, Heading, Text } from '@radix-ui/themes';
 import type { DatasetUploadView } from '@skyledger/contracts';
 import { useState } from 'react';
 import { FileField } from '@/components/ui/file-field';
+import { ProgressLine } from '@/components/ui/progress-line';
 import { changeErrorMessage } from '@/lib/api-error-messages';
 import { formatBytes } from '@/lib/format-bytes';
 import { useUploadDatasetFile } from '../../api/upload-dataset-file';
@@ -22,6 +23,7 @@ export function UploadCsvCard({ uploaded, onUploaded }: UploadCsvCardProps) {
   const upload = useUploadDatasetFile();
   const [file, setFile] = useState<File | null>(null);
   const [error, setError] = useState<string | undefined>();
+  const [sent, setSent] = useState<number>();
 
   return (
     <Card size="3">
@@ -31,10 +33,13 @@ export function UploadCsvCard({ uploaded, onUploaded }: UploadCsvCardProps) {
         onSubmit={(event) => {
           event.preventDefault();
           if (!file) return setError('Choose a CSV file to upload');
-          upload.mutate(file, {
-            onSuccess: onUploaded,
-            onError: (cause) => setError(changeErrorMessage(cause, '', fileWords)),
-          });
+          upload.mutate(
+            { file, onProgress: setSent },
+            {
+              onSuccess: onUploaded,
+              onError: (cause) => setError(changeErrorMessage(cause, '', fileWords)),
+            },
+          );
         }}
       >
         <Flex direction="column" gap="3">
@@ -56,13 +61,23 @@ export function UploadCsvCard({ uploaded, onUploaded }: UploadCsvCardProps) {
               <UploadIcon aria-hidden />
               Upload
             </Button>
-            <Text role="status" size="2" color="gray">
-              {upload.isPending && file
-                ? `Uploading ${file.name} (${formatBytes(file.size)}) and reading its columns…`
-                : uploaded
-                  ? `Uploaded ${uploaded.attachment.originalName}: ${uploaded.columns.length} columns, ${uploaded.rowCount} rows below the header.`
-                  : ''}
-            </Text>
+            <Box role="status" flexGrow="1">
+              {upload.isPending && file ? (
+                <ProgressLine
+                  label={
+                    sent === 1
+                      ? `Reading the columns of ${file.name}…`
+                      : `Uploading ${file.name} (${formatBytes(file.size)})`
+                  }
+                  fraction={sent === 1 ? undefined : sent}
+                />
+              ) : uploaded ? (
+                <Text size="2" color="gray">
+                  Uploaded {uploaded.attachment.originalName}: {uploaded.columns.length} columns,{' '}
+                  {uploaded.rowCount} rows below the header.
+                </Text>
+              ) : null}
+            </Box>
           </Flex>
         </Flex>
       </form>

@@ -5,7 +5,7 @@ import { useId, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { FormError } from '@/components/ui/form-error';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { optionalText } from '@/features/claims/forms/form-rules';
 import { useMoveClaim } from '../../api/move-claim';

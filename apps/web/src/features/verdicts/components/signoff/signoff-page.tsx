@@ -1,11 +1,10 @@
 import { InfoCircledIcon } from '@radix-ui/react-icons';
 import { Callout, Card, Flex, Grid, Heading, Text } from '@radix-ui/themes';
 import type { CurrentUser } from '@skyledger/contracts';
-import { useState } from 'react';
 import { AppLink } from '@/components/ui/app-link';
 import { DateTime } from '@/components/ui/date-time';
 import { DocumentTitle } from '@/components/ui/document-title';
-import { LiveNotice, type Notice } from '@/components/ui/live-notice';
+import { useShowNotice } from '@/components/ui/toaster';
 import { paths } from '@/config/paths';
 import { useClaim } from '@/features/claims/api/get-claim';
 import { useSignoff } from '../../api/get-signoff';
@@ -23,17 +22,19 @@ export function SignoffPage({ claimId, user }: { claimId: string; user: CurrentU
   const { data: claim } = useClaim(claimId);
   const { data: signoff } = useSignoff(claimId);
   const onHand = useWorkingsOnHand(claimId);
-  const [notice, setNotice] = useState<Notice | null>(null);
+  const showNotice = useShowNotice();
   const { version, previous } = signoff;
   const replyOpen = signoff.checklist.some((item) => item.key === 'rightOfReply' && !item.done);
 
   return (
     <Flex direction="column" gap="5">
       <DocumentTitle title={`Sign-off: ${claim.summary}`} />
-      <ClaimVerdictHeader claim={claim} title="Sign-off" />
-      {/* No gap for the notice's live region while it is empty. */}
-      <Flex direction="column" gap={notice ? '4' : '0'}>
-        <LiveNotice notice={notice} />
+      <ClaimVerdictHeader
+        claim={claim}
+        title="Sign-off"
+        purpose="Check the submitted version against the checklist, then clear it for publishing or send it back with notes. Nobody signs off a version they drafted or last edited."
+      />
+      <Flex direction="column">
         {!version ? (
           <Card size="3">
             <Flex direction="column" gap="2">
@@ -108,7 +109,7 @@ export function SignoffPage({ claimId, user }: { claimId: string; user: CurrentU
                     <SignoffChecklist items={signoff.checklist} />
                     {replyOpen && user.role === 'desk_chief' ? (
                       <Flex>
-                        <WaiveReplyDialog claim={claim} onNotice={setNotice} />
+                        <WaiveReplyDialog claim={claim} onNotice={showNotice} />
                       </Flex>
                     ) : null}
                   </Flex>
@@ -131,7 +132,7 @@ export function SignoffPage({ claimId, user }: { claimId: string; user: CurrentU
                 <DecisionPanel
                   claim={claim}
                   signoff={{ ...signoff, version }}
-                  onNotice={setNotice}
+                  onNotice={showNotice}
                 />
               </Card>
             </Flex>

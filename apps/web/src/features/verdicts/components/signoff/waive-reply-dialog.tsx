@@ -1,6 +1,6 @@
 import { Button } from '@radix-ui/themes';
 import { replyWaiverSchema, type ClaimDetail } from '@skyledger/contracts';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { FormDialog } from '@/features/claims/components/shared/form-dialog';
 import { useFormDialog } from '@/features/claims/components/shared/use-form-dialog';

@@ -2,8 +2,8 @@ import { PlusIcon } from '@radix-ui/react-icons';
 import { Button } from '@radix-ui/themes';
 import { z } from 'zod';
 import { ControlledCheckbox } from '@/components/ui/controlled-checkbox';
-import type { ShowNotice } from '@/components/ui/live-notice';
-import { browserTimeZone } from '@/lib/zoned-time';
+import type { ShowNotice } from '@/components/ui/toaster';
+import { useDeskTimeZone } from '@/lib/desk-time-zone';
 import { useAddAppearance } from '../../../api/add-appearance';
 import {
   appearanceFormField,
@@ -25,9 +25,10 @@ export function AddAppearanceDialog({
   onNotice: ShowNotice;
 }) {
   const add = useAddAppearance(claimId);
+  const deskTimeZone = useDeskTimeZone();
   const { form, dialog } = useFormDialog({
     schema,
-    initial: () => ({ appearance: emptyAppearance(browserTimeZone()), isFirstKnown: false }),
+    initial: () => ({ appearance: emptyAppearance(deskTimeZone), isFirstKnown: false }),
     send: (values) =>
       add.mutateAsync({
         ...toAppearanceRequest(values.appearance),

@@ -1,8 +1,9 @@
 import { Badge, Button, Card, Flex, Link, Text } from '@radix-ui/themes';
 import type { AppearanceView, ClaimDetail, CurrentUser } from '@skyledger/contracts';
 import { DateTime } from '@/components/ui/date-time';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { changeErrorMessage } from '@/lib/api-error-messages';
+import { useDeskTimeZone } from '@/lib/desk-time-zone';
 import { useUpdateAppearance } from '../../../api/update-appearance';
 import { hasClaimRole, mayChangePart } from '../../../claim-permissions';
 import { OpenFileButton } from '../files/open-file-button';
@@ -18,6 +19,7 @@ interface AppearanceItemProps {
 
 export function AppearanceItem({ claim, appearance, user, onNotice }: AppearanceItemProps) {
   const update = useUpdateAppearance(claim.id);
+  const deskTimeZone = useDeskTimeZone();
   const mayChange =
     hasClaimRole(user.role, 'contribute') && mayChangePart(user, appearance.addedBy);
   const capture = claim.attachments.find((file) => file.id === appearance.captureAttachmentId);
@@ -57,8 +59,14 @@ export function AppearanceItem({ claim, appearance, user, onNotice }: Appearance
         </Link>
         <Text size="2">
           Seen <DateTime value={appearance.seenAt} timeZone={appearance.seenTimeZone} /> (
-          {appearance.seenTimeZone.replaceAll('_', ' ')}); on the desk&apos;s clock{' '}
-          <DateTime value={appearance.seenAt} />.
+          {appearance.seenTimeZone.replaceAll('_', ' ')})
+          {appearance.seenTimeZone === deskTimeZone ? (
+            '.'
+          ) : (
+            <>
+              ; on the desk&apos;s clock <DateTime value={appearance.seenAt} />.
+            </>
+          )}
         </Text>
         <Text size="1" color="gray">
           Added by {appearance.addedBy.displayName}

@@ -1,9 +1,10 @@
 import { UploadIcon } from '@radix-ui/react-icons';
-import { Button, Text } from '@radix-ui/themes';
+import { Box, Button } from '@radix-ui/themes';
 import type { AppearanceView } from '@skyledger/contracts';
 import { useState } from 'react';
 import { FileField } from '@/components/ui/file-field';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import { ProgressLine } from '@/components/ui/progress-line';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { changeErrorMessage } from '@/lib/api-error-messages';
 import { useAttachCapture } from '../../../api/attach-capture';
 import {
@@ -26,6 +27,7 @@ export function AttachCaptureDialog({ claimId, appearance, onNotice }: AttachCap
   const [file, setFile] = useState<File | null>(null);
   const [error, setError] = useState<string | undefined>();
   const [uploaded, setUploaded] = useState(false);
+  const [sent, setSent] = useState<number>();
   const attach = useAttachCapture(claimId);
 
   const close = (next: boolean) => {
@@ -57,7 +59,7 @@ export function AttachCaptureDialog({ claimId, appearance, onNotice }: AttachCap
         if (!looksLikeEvidenceFile(file)) return setError(`Choose a ${evidenceFileHint} file`);
         setUploaded(false);
         attach.mutate(
-          { appearance, file, onUploaded: () => setUploaded(true) },
+          { appearance, file, onUploaded: () => setUploaded(true), onProgress: setSent },
           {
             onSuccess: () => {
               close(false);
@@ -81,9 +83,14 @@ export function AttachCaptureDialog({ claimId, appearance, onNotice }: AttachCap
           setError(undefined);
         }}
       />
-      <Text role="status" size="2" color="gray">
-        {attach.isPending ? (uploaded ? 'Attaching it to the appearance…' : 'Uploading…') : ''}
-      </Text>
+      <Box role="status">
+        {attach.isPending ? (
+          <ProgressLine
+            label={uploaded ? 'Attaching it to the appearance…' : 'Uploading…'}
+            fraction={uploaded ? undefined : sent}
+          />
+        ) : null}
+      </Box>
     </FormDialog>
   );
 }

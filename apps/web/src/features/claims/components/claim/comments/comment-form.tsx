@@ -3,7 +3,7 @@ import { Button, Flex } from '@radix-ui/themes';
 import { createCommentSchema, type CreateCommentRequest } from '@skyledger/contracts';
 import { useForm } from 'react-hook-form';
 import { FormError } from '@/components/ui/form-error';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { applyApiError } from '@/lib/form-errors';
 import { useAddComment } from '../../../api/add-comment';

@@ -1,7 +1,7 @@
 import { PlusIcon } from '@radix-ui/react-icons';
 import { Button, Grid } from '@radix-ui/themes';
 import { ControlledSelect } from '@/components/ui/controlled-select';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextInputField } from '@/components/ui/text-input-field';
 import { useAddConsultation } from '../../../api/add-consultation';

@@ -1,8 +1,10 @@
 import { UploadIcon } from '@radix-ui/react-icons';
-import { Button, Card, Flex, Text } from '@radix-ui/themes';
+import { Box, Button, Card, Flex } from '@radix-ui/themes';
 import { useState } from 'react';
 import { FileField } from '@/components/ui/file-field';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import { ProgressLine } from '@/components/ui/progress-line';
+import { formatBytes } from '@/lib/format-bytes';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { changeErrorMessage } from '@/lib/api-error-messages';
 import { useUploadAttachment } from '../../../api/upload-attachment';
 import {
@@ -25,6 +27,7 @@ export function UploadEvidenceForm({
   const [error, setError] = useState<string | undefined>();
   // A new key empties the file input after an upload: its value cannot be set from script.
   const [inputKey, setInputKey] = useState(0);
+  const [sent, setSent] = useState<number>();
 
   return (
     <Card size="2">
@@ -35,14 +38,17 @@ export function UploadEvidenceForm({
           event.preventDefault();
           if (!file) return setError('Choose a file to upload');
           if (!looksLikeEvidenceFile(file)) return setError(`Choose a ${evidenceFileHint} file`);
-          upload.mutate(file, {
-            onSuccess: (uploaded) => {
-              setFile(null);
-              setInputKey((key) => key + 1);
-              onNotice({ tone: 'success', text: `${uploaded.originalName} is uploaded.` });
+          upload.mutate(
+            { file, onProgress: setSent },
+            {
+              onSuccess: (uploaded) => {
+                setFile(null);
+                setInputKey((key) => key + 1);
+                onNotice({ tone: 'success', text: `${uploaded.originalName} is uploaded.` });
+              },
+              onError: (cause) => setError(changeErrorMessage(cause, staleClaimMessage)),
             },
-            onError: (cause) => setError(changeErrorMessage(cause, staleClaimMessage)),
-          });
+          );
         }}
       >
         <Flex direction="column" gap="3">
@@ -62,9 +68,14 @@ export function UploadEvidenceForm({
               <UploadIcon aria-hidden />
               Upload
             </Button>
-            <Text role="status" size="2" color="gray">
-              {upload.isPending && file ? `Uploading ${file.name}…` : ''}
-            </Text>
+            <Box role="status" flexGrow="1">
+              {upload.isPending && file ? (
+                <ProgressLine
+                  label={`Uploading ${file.name} (${formatBytes(file.size)})`}
+                  fraction={sent}
+                />
+              ) : null}
+            </Box>
           </Flex>
         </Flex>
       </form>

@@ -8,11 +8,11 @@ import {
 } from '@skyledger/contracts';
 import { Controller } from 'react-hook-form';
 import { ControlledSelect } from '@/components/ui/controlled-select';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextInputField } from '@/components/ui/text-input-field';
 import { ZonedDateTimeField } from '@/components/ui/zoned-date-time-field';
-import { browserTimeZone } from '@/lib/zoned-time';
+import { useDeskTimeZone } from '@/lib/desk-time-zone';
 import { useAddReplyAttempt } from '../../../api/add-reply-attempt';
 import {
   emptyReplyAttemptForm,
@@ -35,9 +35,10 @@ interface LogReplyAttemptDialogProps {
 
 export function LogReplyAttemptDialog({ claimId, claimant, onNotice }: LogReplyAttemptDialogProps) {
   const add = useAddReplyAttempt(claimId);
+  const deskTimeZone = useDeskTimeZone();
   const { form, dialog } = useFormDialog({
     schema: replyAttemptFormSchema,
-    initial: () => emptyReplyAttemptForm(browserTimeZone()),
+    initial: () => emptyReplyAttemptForm(deskTimeZone),
     send: (values) => add.mutateAsync(toCreateReplyAttemptRequest(values)),
     onSent: (logged) =>
       onNotice({ tone: 'success', text: `The attempt to reach ${logged.contacted} is logged.` }),

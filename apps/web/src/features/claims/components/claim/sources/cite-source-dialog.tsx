@@ -3,7 +3,7 @@ import { Box, Button, Dialog, Flex, Tabs } from '@radix-ui/themes';
 import type { SourceView } from '@skyledger/contracts';
 import { useState } from 'react';
 import { FormError } from '@/components/ui/form-error';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { changeErrorMessage } from '@/lib/api-error-messages';
 import { useLinkSource } from '../../../api/link-source';
 import { staleClaimMessage } from '../claim-messages';

@@ -1,7 +1,7 @@
 import { Button } from '@radix-ui/themes';
 import { createSourceSchema, type ClaimSourceView } from '@skyledger/contracts';
 import { z } from 'zod';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { useUpdateSource } from '../../../api/update-source';
 import { FormDialog } from '../../shared/form-dialog';
 import { useFormDialog } from '../../shared/use-form-dialog';

@@ -1,7 +1,7 @@
 import { Badge, Card, Flex, Link, Text } from '@radix-ui/themes';
 import { sourceKindLabels, type ClaimSourceView, type CurrentUser } from '@skyledger/contracts';
 import { DateTime } from '@/components/ui/date-time';
-import type { ShowNotice } from '@/components/ui/live-notice';
+import type { ShowNotice } from '@/components/ui/toaster';
 import { hasClaimRole, mayChangePart } from '../../../claim-permissions';
 import { GradeBadge } from './grade-badge';
 import { RegradeDialog } from './regrade-dialog';

@@ -3,7 +3,7 @@ import { Button, Flex, Heading } from '@radix-ui/themes';
 import type { ClaimDetail, CurrentUser } from '@skyledger/contracts';
 import { useForm } from 'react-hook-form';
 import { FormError } from '@/components/ui/form-error';
-import type { Notice } from '@/components/ui/live-notice';
+import type { Notice } from '@/components/ui/toaster';
 import { applyApiError } from '@/lib/form-errors';
 import { useUpdateClaim } from '../../../api/update-claim';
 import {
