@@ -15,6 +15,8 @@ const open = 'open' as const;
 const expected: Record<string, typeof open | readonly Role[]> = {
   // Signing in and the links in mails: open by nature.
   'GET /api/health': open,
+  // The benchmark's constant reference answer; registered outside production only.
+  'GET /api/bench/ping': open,
   'POST /api/auth/sign-in': open,
   // Open, but it answers only to the refresh cookie: a bearer token does not count.
   'POST /api/auth/refresh': [],
