@@ -131,11 +131,11 @@ export class CompactIndex {
     this.slotCount += 1;
     this.grow(slot + 1);
     fields.forEach((text, field) => {
-      const words = this.tokenize(text);
-      this.lengths[field]![slot] = Math.min(words.length, 65_535);
-      this.lengthSums[field]! += words.length;
       const counts = new Map<string, number>();
-      for (const word of words) counts.set(word, (counts.get(word) ?? 0) + 1);
+      for (const word of this.tokenize(text)) counts.set(word, (counts.get(word) ?? 0) + 1);
+      // A field's length is its number of distinct words, as MiniSearch 7 counts it.
+      this.lengths[field]![slot] = Math.min(counts.size, 65_535);
+      this.lengthSums[field]! += this.lengths[field]![slot]!;
       for (const [word, count] of counts) {
         const postings = this.postings[this.termId(word)]!;
         (postings[field] ??= new Posting()).push(slot, count);
