@@ -118,10 +118,12 @@ export class ClaimPartsService {
     manager: EntityManager,
     id: string,
   ): Promise<View> {
-    const part = await manager.findOneOrFail(kind.entity, {
-      where: { id } as FindOptionsWhere<Part>,
-      relations: { createdBy: true } as never,
-    });
+    // One query: findOne with a relation first picks the distinct id in a query of its own.
+    const part = await manager
+      .createQueryBuilder(kind.entity, 'part')
+      .leftJoinAndSelect('part.createdBy', 'createdBy')
+      .where('part.id = :id', { id })
+      .getOneOrFail();
     return kind.toView(part);
   }
 }
