@@ -70,10 +70,16 @@ const asSaid = (text: string) => text.replaceAll('{place}', 'Wenlow').replaceAll
 
 export const similarQueries: string[] = claimPatterns.map((pattern) => asSaid(pattern.text));
 
-/** The same sentences with their longest word misspelled. */
+/**
+ * The gist of each sentence typed in haste: its three longest words, each with one slip.
+ * A slip in one word of a whole sentence tests nothing, as the other words find the claim.
+ */
 export const similarTypoQueries: TypoCase[] = claimPatterns.map((pattern, index) => {
-  const text = asSaid(pattern.text);
-  const intended = [...wordsIn(text)].sort((a, b) => b.length - a.length)[0]!.toLowerCase();
-  const typo = misspell(intended, index);
-  return { query: text.replace(new RegExp(intended, 'i'), typo), intended };
+  const longest = [...new Set(wordsIn(asSaid(pattern.text)).map((word) => word.toLowerCase()))]
+    .sort((a, b) => b.length - a.length)
+    .slice(0, 3);
+  return {
+    query: longest.map((word, n) => misspell(word, index + n)).join(' '),
+    intended: longest[0]!,
+  };
 });
