@@ -73,9 +73,12 @@ class BestOf {
       }
       return;
     }
-    const worst = heap[0];
-    if (!worst || better({ slot, score, date }, worst) <= 0) return;
-    heap[0] = { slot, score, date };
+    const worst = heap[0]!;
+    // Most offers lose on score alone: tested before anything is allocated for them.
+    if (score < worst.score) return;
+    const offered = { slot, score, date };
+    if (better(offered, worst) <= 0) return;
+    heap[0] = offered;
     for (let i = 0; ;) {
       const left = 2 * i + 1;
       const right = left + 1;
