@@ -287,4 +287,31 @@ describe('verdicts and sign-off', () => {
       .waitFor();
     await page.close();
   });
+
+  it('gives the desk chief’s phone the outbox as cards with each mail’s delivery', async () => {
+    const page = await browser.newPage(phone);
+    await signIn(page, browser.baseUrl, demo.desk_chief.email);
+    await page.goto(`${browser.baseUrl}/outbox`);
+    await page.getByRole('list', { name: 'Mails' }).waitFor();
+    await page.getByRole('link', { name: /^Sent/ }).click();
+    await page.waitForURL(/state=sent/);
+    const cards = page.getByRole('list', { name: 'Mails: sent' });
+    const cleared = cards.getByRole('listitem').filter({ hasText: `Cleared: ${summary}` });
+    await cleared.waitFor();
+    const facts = await cleared.innerText();
+    expect(facts).toMatch(/^Sent\s+Verdict cleared/);
+    expect(facts).toMatch(new RegExp(`To\\s+${literal(demo.science_editor.email)}`));
+    expect(facts).toMatch(/Attempts\s+1\b/);
+    expect(facts).toMatch(/Last error\s+None/);
+    expect(facts).toMatch(/Next attempt \/ sent\s+Sent \d{1,2} \w{3} 2\d{3}/);
+    // A sent mail has nothing to retry.
+    expect(await cleared.getByRole('button').count()).toBe(0);
+    expect(await page.getByRole('table').isVisible()).toBe(false);
+    await expectAccessible(page);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(
+      phone.width,
+    );
+    await screenshot(page, 'outbox-sent-phone');
+    await page.close();
+  });
 });

@@ -169,16 +169,17 @@ describe('the rating scale', { timeout: 20_000 }, () => {
 });
 
 describe('the outbox', { timeout: 20_000 }, () => {
+  const outboxWithRetry = () =>
+    signedIn('desk_chief', {
+      'GET /api/outbox': { status: 200, body: outboxPage() },
+      [`POST /api/outbox/${failedMail.id}/retry`]: {
+        status: 200,
+        body: { ...failedMail, state: 'pending', attempts: 0, lastError: null },
+      },
+    });
+
   it('lists the mails with their state, and puts a failed one back in line', async () => {
-    const fake = mockApi(
-      signedIn('desk_chief', {
-        'GET /api/outbox': { status: 200, body: outboxPage() },
-        [`POST /api/outbox/${failedMail.id}/retry`]: {
-          status: 200,
-          body: { ...failedMail, state: 'pending', attempts: 0, lastError: null },
-        },
-      }),
-    );
+    const fake = mockApi(outboxWithRetry());
     const { user } = renderApp('/outbox');
     const table = await screen.findByRole('region', { name: 'Mails' });
     const rows = within(table).getAllByRole('row');
@@ -213,6 +214,32 @@ describe('the outbox', { timeout: 20_000 }, () => {
         within(screen.getByRole('region', { name: 'Mails' })).getByText('Waiting'),
       ).toBeInTheDocument(),
     );
+  });
+
+  it('gives a phone each mail as a card with the same facts and retry', async () => {
+    const fake = mockApi(outboxWithRetry());
+    const { user } = renderApp('/outbox');
+    const cards = await screen.findByRole('list', { name: 'Mails' });
+    const [sent, failed] = within(cards).getAllByRole('listitem');
+    expect(sent).toHaveTextContent(/^SentSign-off requested/);
+    expect(sent).toHaveTextContent('Last errorNone');
+    expect(within(sent!).queryByRole('button')).not.toBeInTheDocument();
+    expect(failed).toHaveTextContent(/^FailedVerdict sent back/);
+    expect(failed).toHaveTextContent(failedMail.subject);
+    expect(failed).toHaveTextContent(`To${failedMail.to}`);
+    expect(failed).toHaveTextContent('Attempts8');
+    expect(failed).toHaveTextContent('Last errorconnect ECONNREFUSED 127.0.0.1:1025');
+    expect(failed).toHaveTextContent('Not until retried');
+
+    await user.click(
+      within(failed!).getByRole('button', {
+        name: `Retry the mail to ${failedMail.to}: ${failedMail.subject}`,
+      }),
+    );
+    expect(
+      await screen.findByText(`The mail to ${failedMail.to} is back in line.`),
+    ).toBeInTheDocument();
+    expect(fake.calls(`POST /api/outbox/${failedMail.id}/retry`)).toHaveLength(1);
   });
 
   it('reads the state tab from the address', async () => {

@@ -20,6 +20,11 @@ function sortedList(request: RecordedRequest): MockReply {
   return listOf(items);
 }
 
+/** The desktop table; jsdom applies no CSS, so the phone's cards are in the document too. */
+async function findTable() {
+  return within(await screen.findByRole('table'));
+}
+
 function rowOf(name: string) {
   const cell = screen.getByRole('rowheader', { name: new RegExp(name) });
   const row = cell.closest('tr');
@@ -186,7 +191,8 @@ describe('People page', () => {
     });
     const { user } = renderApp('/people');
 
-    await user.click(await screen.findByRole('combobox', { name: 'Role of Tobias Renn' }));
+    const table = await findTable();
+    await user.click(await table.findByRole('combobox', { name: 'Role of Tobias Renn' }));
     await user.click(await screen.findByRole('option', { name: 'Desk chief' }));
 
     expect(await screen.findByText('Tobias Renn is now Desk chief.')).toBeInTheDocument();
@@ -195,7 +201,7 @@ describe('People page', () => {
       version: 4,
     });
     await waitFor(() =>
-      expect(screen.getByRole('combobox', { name: 'Role of Tobias Renn' })).toHaveTextContent(
+      expect(table.getByRole('combobox', { name: 'Role of Tobias Renn' })).toHaveTextContent(
         'Desk chief',
       ),
     );
@@ -217,14 +223,15 @@ describe('People page', () => {
     });
     const { user } = renderApp('/people');
 
-    await user.click(await screen.findByRole('combobox', { name: 'Role of Tobias Renn' }));
+    const table = await findTable();
+    await user.click(await table.findByRole('combobox', { name: 'Role of Tobias Renn' }));
     await user.click(await screen.findByRole('option', { name: 'Reporter' }));
 
     expect(
       await screen.findByText('Someone else changed this person — reloaded.'),
     ).toBeInTheDocument();
     await waitFor(() =>
-      expect(screen.getByRole('combobox', { name: 'Role of Tobias Renn' })).toHaveTextContent(
+      expect(table.getByRole('combobox', { name: 'Role of Tobias Renn' })).toHaveTextContent(
         'Copy desk',
       ),
     );
@@ -247,7 +254,8 @@ describe('People page', () => {
     });
     const { user } = renderApp('/people');
 
-    await user.click(await screen.findByRole('button', { name: 'Disable Ines Calder' }));
+    const table = await findTable();
+    await user.click(await table.findByRole('button', { name: 'Disable Ines Calder' }));
     const confirm = await screen.findByRole('alertdialog', { name: 'Disable Ines Calder?' });
     expect(fake.calls(`PATCH /api/users/${ines.id}`)).toHaveLength(0);
     await user.click(within(confirm).getByRole('button', { name: 'Disable account' }));
@@ -278,7 +286,8 @@ describe('People page', () => {
     });
     const { user } = renderApp('/people');
 
-    await user.click(await screen.findByRole('combobox', { name: 'Role of Tobias Renn' }));
+    const table = await findTable();
+    await user.click(await table.findByRole('combobox', { name: 'Role of Tobias Renn' }));
     await user.click(await screen.findByRole('option', { name: 'Reporter' }));
 
     expect(await screen.findByRole('status')).toHaveTextContent(
@@ -307,13 +316,54 @@ describe('People page', () => {
     });
     const { user } = renderApp('/people');
 
+    const table = await findTable();
     await user.click(
-      await screen.findByRole('button', { name: 'Resend the invitation to Priya Lund' }),
+      await table.findByRole('button', { name: 'Resend the invitation to Priya Lund' }),
     );
 
     expect(await screen.findByRole('status')).toHaveTextContent(
       'A fresh invitation link went to p.lund@marrowby-gazette.test.',
     );
     expect(fake.calls(`POST /api/users/${priya.id}/invitation`)).toHaveLength(1);
+  });
+
+  it('gives a phone each person as a card, sorted by a choice through the API', async () => {
+    const fake = mockApi({ ...chief, 'GET /api/users': sortedList });
+    const { user, location } = renderApp('/people');
+
+    const cards = await screen.findByRole('list', { name: 'People on the desk' });
+    const cardOf = (name: string) => {
+      const card = within(cards)
+        .getAllByRole('listitem')
+        .find((item) => within(item).queryByText(name));
+      if (!card) throw new Error(`No card for ${name}`);
+      return within(card);
+    };
+    expect(cardOf('Priya Lund').getByText('Invited')).toBeInTheDocument();
+    expect(cardOf('Priya Lund').getByText('Never')).toBeInTheDocument();
+    expect(
+      cardOf('Priya Lund').getByRole('button', { name: 'Resend the invitation to Priya Lund' }),
+    ).toBeInTheDocument();
+    expect(
+      cardOf('Tobias Renn').getByRole('combobox', { name: 'Role of Tobias Renn' }),
+    ).toHaveTextContent('Science editor');
+    expect(
+      cardOf('Tobias Renn').getByRole('button', { name: 'Disable Tobias Renn' }),
+    ).toBeInTheDocument();
+    expect(cardOf('Mara Quill').getByText('That is you')).toBeInTheDocument();
+    expect(cardOf('Mara Quill').queryByRole('button')).not.toBeInTheDocument();
+
+    await user.click(screen.getByRole('combobox', { name: 'Sort by' }));
+    await user.click(await screen.findByRole('option', { name: 'E-mail, Z to A' }));
+
+    await waitFor(() => expect(location()).toBe('/people?sort=email&order=desc'));
+    expect(fake.calls('GET /api/users').at(-1)?.search.toString()).toBe('sort=email&order=desc');
+    await waitFor(() =>
+      expect(
+        within(screen.getByRole('list', { name: 'People on the desk' })).getAllByRole(
+          'listitem',
+        )[0],
+      ).toHaveTextContent('Joss Whitcombe'),
+    );
   });
 });

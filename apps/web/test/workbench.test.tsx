@@ -318,6 +318,9 @@ describe('workbench', { timeout: 20_000 }, () => {
 
     const panel = await screen.findByRole('region', { name: 'Save to a claim' });
     const choices = await within(panel).findByRole('radiogroup', { name: 'Claim to save it to' });
+    expect(choices).toHaveAccessibleDescription(
+      'Every claim on the desk, whatever its state, most recently changed first.',
+    );
     expect(fake.calls('GET /api/claims')[0]?.search.toString()).toBe(
       'page=1&pageSize=8&sort=updatedAt&order=desc',
     );

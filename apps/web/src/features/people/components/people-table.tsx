@@ -14,7 +14,7 @@ const sortableColumns: readonly { field: UserSortField; label: string }[] = [
   { field: 'lastSignInAt', label: 'Last sign-in' },
 ];
 
-interface PeopleTableProps {
+export interface PeopleTableProps {
   users: readonly UserListItem[];
   sort: UsersSort;
   onSort: (field: UserSortField) => void;

@@ -1,21 +1,12 @@
-import { Badge, Flex, Table, Text } from '@radix-ui/themes';
-import {
-  roleLabels,
-  userStatusLabels,
-  type UserListItem,
-  type UserStatus,
-} from '@skyledger/contracts';
-import { AccountStatusDialog } from './account-status-dialog';
+import { Table } from '@radix-ui/themes';
+import type { UserListItem } from '@skyledger/contracts';
 import { DateTime } from '@/components/ui/date-time';
+import { LastSignIn } from './last-sign-in';
 import type { ShowNotice } from './people-notice';
-import { ResendInvitationButton } from './resend-invitation-button';
-import { RoleSelect } from './role-select';
-
-const statusColors = {
-  active: 'jade',
-  invited: 'amber',
-  disabled: 'gray',
-} as const satisfies Record<UserStatus, string>;
+import { UserActions } from './user-actions';
+import { UserName } from './user-name';
+import { UserRole } from './user-role';
+import { UserStatusBadge } from './user-status-badge';
 
 interface UserRowProps {
   user: UserListItem;
@@ -27,48 +18,23 @@ export function UserRow({ user, isCurrentUser, onNotice }: UserRowProps) {
   return (
     <Table.Row align="center">
       <Table.RowHeaderCell>
-        <Flex direction="column">
-          <Text weight="bold">{user.displayName}</Text>
-          {isCurrentUser ? (
-            <Text size="1" color="gray">
-              That is you
-            </Text>
-          ) : null}
-        </Flex>
+        <UserName name={user.displayName} isCurrentUser={isCurrentUser} />
       </Table.RowHeaderCell>
       <Table.Cell className="sl-nowrap">{user.email}</Table.Cell>
       <Table.Cell>
-        {/* Your own role and account are changed by another desk chief, so nobody locks themself out. */}
-        {isCurrentUser ? (
-          <Text>{roleLabels[user.role]}</Text>
-        ) : (
-          <RoleSelect user={user} onNotice={onNotice} />
-        )}
+        <UserRole user={user} isCurrentUser={isCurrentUser} onNotice={onNotice} />
       </Table.Cell>
       <Table.Cell>
-        <Badge color={statusColors[user.status]} highContrast variant="soft">
-          {userStatusLabels[user.status]}
-        </Badge>
+        <UserStatusBadge status={user.status} />
       </Table.Cell>
       <Table.Cell>
         <DateTime value={user.createdAt} show="date" />
       </Table.Cell>
       <Table.Cell>
-        {user.lastSignInAt ? (
-          <DateTime value={user.lastSignInAt} show="date" />
-        ) : (
-          <Text color="gray">Never</Text>
-        )}
+        <LastSignIn at={user.lastSignInAt} />
       </Table.Cell>
       <Table.Cell>
-        <Flex gap="2" wrap="wrap">
-          {user.status === 'invited' ? (
-            <ResendInvitationButton user={user} onNotice={onNotice} />
-          ) : null}
-          {!isCurrentUser && user.status !== 'invited' ? (
-            <AccountStatusDialog user={user} onNotice={onNotice} />
-          ) : null}
-        </Flex>
+        <UserActions user={user} isCurrentUser={isCurrentUser} onNotice={onNotice} />
       </Table.Cell>
     </Table.Row>
   );

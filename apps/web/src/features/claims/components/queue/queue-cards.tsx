@@ -7,22 +7,20 @@ import {
 } from '@skyledger/contracts';
 import { AppLink } from '@/components/ui/app-link';
 import { DateTime } from '@/components/ui/date-time';
-import { SelectField } from '@/components/ui/select-field';
+import { SortSelect, type SortChoice } from '@/components/ui/sort-select';
 import { paths } from '@/config/paths';
 import { queueDefaults } from '../../api/queue-search';
 import { ClaimStatusBadge, LegalReviewBadge } from '../claim-status-badge';
 
-type SortChoice = `${ClaimSortField} ${'asc' | 'desc'}`;
-
-const sortChoices: { value: SortChoice; label: string }[] = [
-  { value: 'filedAt desc', label: 'Filed, newest first' },
-  { value: 'filedAt asc', label: 'Filed, oldest first' },
-  { value: 'updatedAt desc', label: 'Last change, newest first' },
-  { value: 'updatedAt asc', label: 'Last change, oldest first' },
-  { value: 'status asc', label: 'Status, from filed to set aside' },
-  { value: 'status desc', label: 'Status, from set aside to filed' },
-  { value: 'summary asc', label: 'Claim, A to Z' },
-  { value: 'summary desc', label: 'Claim, Z to A' },
+const sortChoices: SortChoice<ClaimSortField>[] = [
+  { field: 'filedAt', order: 'desc', label: 'Filed, newest first' },
+  { field: 'filedAt', order: 'asc', label: 'Filed, oldest first' },
+  { field: 'updatedAt', order: 'desc', label: 'Last change, newest first' },
+  { field: 'updatedAt', order: 'asc', label: 'Last change, oldest first' },
+  { field: 'status', order: 'asc', label: 'Status, from filed to set aside' },
+  { field: 'status', order: 'desc', label: 'Status, from set aside to filed' },
+  { field: 'summary', order: 'asc', label: 'Claim, A to Z' },
+  { field: 'summary', order: 'desc', label: 'Claim, Z to A' },
 ];
 
 interface QueueCardsProps {
@@ -33,17 +31,13 @@ interface QueueCardsProps {
 
 /** The queue on a phone: each claim as a card with the table's facts, and its sort as a choice. */
 export function QueueCards({ items, query, onChange }: QueueCardsProps) {
-  const sort: SortChoice = `${query.sort ?? queueDefaults.sort} ${query.order ?? queueDefaults.order}`;
   return (
     <Flex direction="column" gap="3">
-      <SelectField
-        label="Sort by"
-        value={sort}
-        options={sortChoices}
-        onValueChange={(choice) => {
-          const [field, order] = choice.split(' ') as [ClaimSortField, 'asc' | 'desc'];
-          onChange({ sort: field, order, page: 1 });
-        }}
+      <SortSelect
+        choices={sortChoices}
+        sort={query.sort ?? queueDefaults.sort}
+        order={query.order ?? queueDefaults.order}
+        onSort={(sort, order) => onChange({ sort, order, page: 1 })}
       />
       <ul className="sl-card-list" aria-label="Claims in the queue">
         {items.map((claim) => (

@@ -1,4 +1,4 @@
-import { Badge, Box, Flex, Table, Text, VisuallyHidden } from '@radix-ui/themes';
+import { Badge, Flex, Table, Text, VisuallyHidden } from '@radix-ui/themes';
 import {
   claimantKindLabels,
   claimSortFields,
@@ -18,6 +18,7 @@ import {
   type Updater,
 } from '@tanstack/react-table';
 import { AppLink } from '@/components/ui/app-link';
+import { CardsOrTable } from '@/components/ui/cards-or-table';
 import { DateTime } from '@/components/ui/date-time';
 import { SortableColumnHeader } from '@/components/ui/sortable-column-header';
 import { paths } from '@/config/paths';
@@ -155,57 +156,57 @@ export function QueueTable({ items, total, query, onChange }: QueueTableProps) {
   return (
     <Flex direction="column" gap="3">
       {/* A phone gets the claims as cards, the same facts stacked, rather than a wide table. */}
-      <Box display={{ initial: 'block', md: 'none' }}>
-        <QueueCards items={items} query={query} onChange={onChange} />
-      </Box>
-      <Box display={{ initial: 'none', md: 'block' }}>
-        <Table.Root variant="surface" className="sl-queue-table">
-          <VisuallyHidden asChild>
-            <caption>
-              Claims in the queue, sorted by{' '}
-              {String(table.getColumn(sortedBy?.id ?? 'filedAt')?.columnDef.header ?? 'Filed')},{' '}
-              {sortedBy?.desc ? 'descending' : 'ascending'}
-            </caption>
-          </VisuallyHidden>
-          <Table.Header>
-            {table.getHeaderGroups().map((group) => (
-              <Table.Row key={group.id}>
-                {group.headers.map((header) =>
-                  sortable.has(header.column.id) ? (
-                    <SortableColumnHeader
-                      key={header.id}
-                      label={String(header.column.columnDef.header)}
-                      sorted={header.column.getIsSorted()}
-                      onSort={() => header.column.toggleSorting()}
-                    />
-                  ) : (
-                    <Table.ColumnHeaderCell key={header.id}>
-                      <table.FlexRender header={header} />
-                    </Table.ColumnHeaderCell>
-                  ),
-                )}
-              </Table.Row>
-            ))}
-          </Table.Header>
-          <Table.Body>
-            {table.getRowModel().rows.map((row) => (
-              <Table.Row key={row.id}>
-                {row.getAllCells().map((cell) =>
-                  cell.column.id === 'summary' ? (
-                    <Table.RowHeaderCell key={cell.id} className="sl-queue-summary">
-                      <table.FlexRender cell={cell} />
-                    </Table.RowHeaderCell>
-                  ) : (
-                    <Table.Cell key={cell.id}>
-                      <table.FlexRender cell={cell} />
-                    </Table.Cell>
-                  ),
-                )}
-              </Table.Row>
-            ))}
-          </Table.Body>
-        </Table.Root>
-      </Box>
+      <CardsOrTable
+        cards={<QueueCards items={items} query={query} onChange={onChange} />}
+        table={
+          <Table.Root variant="surface" className="sl-queue-table">
+            <VisuallyHidden asChild>
+              <caption>
+                Claims in the queue, sorted by{' '}
+                {String(table.getColumn(sortedBy?.id ?? 'filedAt')?.columnDef.header ?? 'Filed')},{' '}
+                {sortedBy?.desc ? 'descending' : 'ascending'}
+              </caption>
+            </VisuallyHidden>
+            <Table.Header>
+              {table.getHeaderGroups().map((group) => (
+                <Table.Row key={group.id}>
+                  {group.headers.map((header) =>
+                    sortable.has(header.column.id) ? (
+                      <SortableColumnHeader
+                        key={header.id}
+                        label={String(header.column.columnDef.header)}
+                        sorted={header.column.getIsSorted()}
+                        onSort={() => header.column.toggleSorting()}
+                      />
+                    ) : (
+                      <Table.ColumnHeaderCell key={header.id}>
+                        <table.FlexRender header={header} />
+                      </Table.ColumnHeaderCell>
+                    ),
+                  )}
+                </Table.Row>
+              ))}
+            </Table.Header>
+            <Table.Body>
+              {table.getRowModel().rows.map((row) => (
+                <Table.Row key={row.id}>
+                  {row.getAllCells().map((cell) =>
+                    cell.column.id === 'summary' ? (
+                      <Table.RowHeaderCell key={cell.id} className="sl-queue-summary">
+                        <table.FlexRender cell={cell} />
+                      </Table.RowHeaderCell>
+                    ) : (
+                      <Table.Cell key={cell.id}>
+                        <table.FlexRender cell={cell} />
+                      </Table.Cell>
+                    ),
+                  )}
+                </Table.Row>
+              ))}
+            </Table.Body>
+          </Table.Root>
+        }
+      />
       <QueuePager
         total={total}
         pagination={pagination}

@@ -25,9 +25,15 @@ export function ClaimPicker({ onPick }: { onPick: (claimId: string) => void }) {
   const claims = useQuery({ ...claimsQueryOptions(query), placeholderData: keepPreviousData });
   return (
     <Flex direction="column" gap="3">
-      <Text id={`${id}-label`} size="2" weight="bold">
-        Claim to save it to
-      </Text>
+      <Flex direction="column" gap="1">
+        <Text id={`${id}-label`} size="2" weight="bold">
+          Claim to save it to
+        </Text>
+        {/* The API takes a working on a claim in any state (workings/working-kind.ts checks only the role). */}
+        <Text id={`${id}-hint`} size="2" color="gray">
+          Every claim on the desk, whatever its state, most recently changed first.
+        </Text>
+      </Flex>
       <CheckboxField
         label="Only claims assigned to me"
         checked={mine}
@@ -48,6 +54,7 @@ export function ClaimPicker({ onPick }: { onPick: (claimId: string) => void }) {
         ) : (
           <RadioGroup.Root
             aria-labelledby={`${id}-label`}
+            aria-describedby={`${id}-hint`}
             onValueChange={onPick}
             className={claims.isPlaceholderData ? 'sl-wb-claims sl-busy' : 'sl-wb-claims'}
           >
