@@ -18,7 +18,10 @@ export interface EngineQuery {
   filters: EngineFilters;
   offset: number;
   limit: number;
-  /** `all`: every word must match (the search page); `any`: the closest documents (similar claims). */
+  /**
+   * `all`: every word must match (the search page); `any`: the closest documents (similar
+   * claims), where a large index may leave out those with only the query's commonest words.
+   */
   match: 'all' | 'any';
 }
 
@@ -40,8 +43,8 @@ export interface EngineResult {
 }
 
 /**
- * One search interface, two engines (an in-process MiniSearch index by default,
- * Meilisearch at scale), chosen by `SEARCH_ENGINE`. Both get the same documents and
+ * One search interface, two engines (an in-process index by default, Meilisearch at
+ * scale), chosen by `SEARCH_ENGINE`. Both get the same documents and
  * pass the same behavioural tests.
  */
 export abstract class SearchEngine {

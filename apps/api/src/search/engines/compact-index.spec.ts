@@ -132,3 +132,62 @@ describe('CompactIndex against MiniSearch', () => {
     for (const result of actual) expect(result.score).toBeCloseTo(byId.get(result.id)!, 9);
   });
 });
+
+describe('CompactIndex: common words in an any search', () => {
+  // 3 000 documents: "the" in all, "warming" in half, and one of 100 rare words in each.
+  const rare = (n: number) => `rare${String.fromCharCode(97 + (n % 26))}${Math.floor(n / 26)}`;
+  const pick = random(20_261_203);
+  const documents = Array.from({ length: 3_000 }, (_, id) => ({
+    id,
+    text: ['the', pick() < 0.5 ? 'warming' : 'record', rare(Math.floor(pick() * 100))].join(' '),
+  }));
+  const reference = new MiniSearch<(typeof documents)[number]>({
+    fields: ['text'],
+    tokenize: (text) => wordsOf(text),
+    processTerm: (term) => term,
+  });
+  reference.addAll(documents);
+  const large = new CompactIndex(1, wordsOf);
+  for (const document of documents) large.add([document.text]);
+
+  function anySearch(query: string) {
+    const found = new Map<number, number>();
+    large.search(
+      wordsOf(query).map((word) => [{ derived: large.derive(word, { prefix: false, typos: 0 }) }]),
+      false,
+      [1],
+      () => true,
+      (slot, score) => found.set(slot, score),
+    );
+    return found;
+  }
+
+  /** MiniSearch's scores for the documents that have one of `finders`: what must be found. */
+  function expectedFor(query: string, finders: string[]) {
+    return reference
+      .search(query, { combineWith: 'OR' })
+      .filter((result) =>
+        finders.some((word) => wordsOf(documents[result.id]!.text).includes(word)),
+      );
+  }
+
+  it('finds documents by the rare words and scores them with every word', () => {
+    const query = `the warming ${rare(7)} ${rare(8)}`;
+    const expected = expectedFor(query, [rare(7), rare(8)]);
+    const found = anySearch(query);
+    expect(expected.length).toBeGreaterThan(20);
+    expect([...found.keys()].sort((a, b) => a - b)).toEqual(
+      expected.map((result) => result.id as number).sort((a, b) => a - b),
+    );
+    for (const result of expected) expect(found.get(result.id)).toBeCloseTo(result.score, 9);
+  });
+
+  it('lets the rarest of common words find documents when every word is common', () => {
+    // "warming" is in half the documents and "the" in all: "warming" finds, "the" adds.
+    const expected = expectedFor('the warming', ['warming']);
+    const found = anySearch('the warming');
+    expect(found.size).toBe(expected.length);
+    expect(found.size).toBeGreaterThan(1_000);
+    for (const result of expected) expect(found.get(result.id)).toBeCloseTo(result.score, 9);
+  });
+});

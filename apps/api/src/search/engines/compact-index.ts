@@ -93,6 +93,142 @@ export interface Scored {
   score: number;
 }
 
+/**
+ * Which words of an `any` search are common: those in more than `share` of the documents
+ * and in more than `rarest` times as many as the query's rarest word; never those in
+ * `floor` documents or fewer, so a small index is searched in full. Our choice, measured
+ * with npm run bench.
+ */
+export interface CommonWords {
+  share: number;
+  rarest: number;
+  floor: number;
+}
+
+const commonWordDefaults: CommonWords = { share: 0.05, rarest: 1.25, floor: 1_000 };
+
+/** The per-slot arrays a search fills. */
+interface Scratch {
+  scores: Float64Array;
+  /** Per slot: the last query word and group counted (packed), or `REJECTED`. */
+  marks: Int32Array;
+  /** Per slot: how many query words matched. */
+  quality: Uint16Array;
+  groupsMet: Uint16Array;
+}
+
+/** A query word in the order of the search; a common one only adds to documents found. */
+interface SearchOrder {
+  groupIndex: number;
+  source: SourceTerm;
+  common: boolean;
+}
+
+interface ScoreParts {
+  boost: number;
+  perWord: number;
+  sourceIndex: number;
+  groupMark: number;
+  earlierGroups: number;
+}
+
+/** Adds one posting's share (one word, one field) to the scores of the slots it lists. */
+class PostingScorer {
+  private readonly scores: Float64Array;
+  private readonly marks: Int32Array;
+  private readonly quality: Uint16Array;
+  private readonly groupsMet: Uint16Array;
+
+  constructor(
+    scratch: Scratch,
+    private readonly posting: Posting,
+    private readonly lengths: Uint16Array,
+    private readonly parts: ScoreParts,
+  ) {
+    ({
+      scores: this.scores,
+      marks: this.marks,
+      quality: this.quality,
+      groupsMet: this.groupsMet,
+    } = scratch);
+  }
+
+  /** Every slot listed, adding the new ones to `touched` (each asked of `accept` once). */
+  walk(touched: number[], accept: (slot: number) => boolean): void {
+    const { marks, groupsMet } = this;
+    const { slots, counts, size } = this.posting;
+    const { earlierGroups } = this.parts;
+    for (let i = 0; i < size; i += 1) {
+      const slot = slots[i]!;
+      // A slot that missed an earlier group of an `all` query cannot match them all.
+      if (groupsMet[slot]! < earlierGroups) continue;
+      const mark = marks[slot]!;
+      if (mark === REJECTED) continue;
+      if (mark === 0) {
+        touched.push(slot);
+        if (!accept(slot)) {
+          marks[slot] = REJECTED;
+          continue;
+        }
+      }
+      this.credit(slot, counts[i]!, mark);
+    }
+  }
+
+  /**
+   * Only the slots already found (`found`, ascending): by galloping through the posting
+   * when they are few beside it, else by walking it and passing over the others.
+   */
+  probe(found: readonly number[]): void {
+    const { marks } = this;
+    const { slots, counts, size } = this.posting;
+    if (found.length * 16 > size) {
+      for (let i = 0; i < size; i += 1) {
+        const slot = slots[i]!;
+        const mark = marks[slot]!;
+        if (mark !== 0 && mark !== REJECTED) this.credit(slot, counts[i]!, mark);
+      }
+      return;
+    }
+    let i = 0;
+    for (const slot of found) {
+      if (i >= size) return;
+      if (slots[i]! < slot) {
+        let low = i;
+        let step = 1;
+        while (low + step < size && slots[low + step]! < slot) {
+          low += step;
+          step *= 2;
+        }
+        let high = Math.min(low + step, size);
+        while (low + 1 < high) {
+          const middle = (low + high) >> 1;
+          if (slots[middle]! < slot) low = middle;
+          else high = middle;
+        }
+        i = high;
+      }
+      if (i < size && slots[i] === slot) this.credit(slot, counts[i]!, marks[slot]!);
+    }
+  }
+
+  private credit(slot: number, frequency: number, mark: number): void {
+    const { boost, perWord, sourceIndex, groupMark } = this.parts;
+    // BM25: tf (k + 1) / (tf + k (1 − b + b · length / average length)).
+    this.scores[slot]! +=
+      boost *
+      (BM25.d +
+        (frequency * (BM25.k + 1)) /
+          (frequency + BM25.k * (1 - BM25.b) + perWord * this.lengths[slot]!));
+    // The mark packs the last query word and the last group counted for the slot.
+    if (mark >> 16 !== sourceIndex) {
+      this.quality[slot]! += 1;
+      if ((mark & 0xffff) !== groupMark) this.groupsMet[slot]! += 1;
+      this.marks[slot] = (sourceIndex << 16) | groupMark;
+    }
+  }
+}
+
 export class CompactIndex {
   private readonly termIds = new Map<string, number>();
   private readonly terms: string[] = [];
@@ -108,14 +244,17 @@ export class CompactIndex {
   private deadPostings = 0;
   private totalPostings = 0;
   /** Per-search scratch, reused: only the slots a search touches are cleared after it. */
-  private scores = new Float64Array(0);
-  private marks = new Int32Array(0);
-  private quality = new Uint16Array(0);
-  private groupsMet = new Uint16Array(0);
+  private scratch: Scratch = {
+    scores: new Float64Array(0),
+    marks: new Int32Array(0),
+    quality: new Uint16Array(0),
+    groupsMet: new Uint16Array(0),
+  };
 
   constructor(
     private readonly fieldCount: number,
     private readonly tokenize: (text: string) => string[],
+    private readonly commonWords: CommonWords = commonWordDefaults,
   ) {
     this.lengths = Array.from({ length: fieldCount }, () => new Uint16Array(1024));
     this.lengthSums = Array.from({ length: fieldCount }, () => 0);
@@ -219,6 +358,10 @@ export class CompactIndex {
    * Scores every slot that matches the groups (each group when `all`, any when not) and
    * `accept`s, and hands each to `visit` with its score; BM25 summed over words and fields,
    * times the number of query words matched, as MiniSearch scores.
+   *
+   * In an `any` search, common words only add to the scores of documents the rarer words
+   * found (the idea of Lucene's CommonTermsQuery): a typed sentence's "the" or "warming"
+   * alone would otherwise rank most of the index. See `commonWords` for which are common.
    */
   search(
     groups: readonly TermGroup[],
@@ -228,59 +371,17 @@ export class CompactIndex {
     visit: (slot: number, score: number) => void,
   ): void {
     this.grow(this.slotCount);
-    // The hot loop reads locals only: a search may walk a million postings.
-    const { scores, marks, quality, groupsMet } = this;
+    const { scores, marks, quality, groupsMet } = this.scratch;
     const touched: number[] = [];
-    let sourceIndex = 0;
-    for (let groupIndex = 0; groupIndex < groups.length; groupIndex += 1) {
-      const groupMark = groupIndex + 1;
-      const earlierGroups = all ? groupIndex : 0;
-      for (const source of groups[groupIndex]!) {
-        sourceIndex += 1;
-        const sourceMark = sourceIndex << 16;
-        for (const { term, weight } of source.derived) {
-          const fields = this.postings[this.termIds.get(term)!];
-          if (!fields) continue;
-          for (let field = 0; field < fields.length; field += 1) {
-            const posting = fields[field];
-            if (!posting || posting.live === 0) continue;
-            const idf = Math.log(1 + (this.liveCount - posting.live + 0.5) / (posting.live + 0.5));
-            const boost = weight * boosts[field]! * idf;
-            // BM25: tf (k + 1) / (tf + k (1 − b + b · length / average length)).
-            const average = this.lengthSums[field]! / Math.max(1, this.liveCount);
-            const flat = BM25.k * (1 - BM25.b);
-            const perWord = (BM25.k * BM25.b) / average;
-            const lengths = this.lengths[field]!;
-            const { slots, counts, size } = posting;
-            for (let i = 0; i < size; i += 1) {
-              const slot = slots[i]!;
-              // A slot that missed an earlier group of an `all` query cannot match them all.
-              if (groupsMet[slot]! < earlierGroups) continue;
-              const mark = marks[slot]!;
-              if (mark === REJECTED) continue;
-              if (mark === 0) {
-                touched.push(slot);
-                if (!accept(slot)) {
-                  marks[slot] = REJECTED;
-                  continue;
-                }
-              }
-              const frequency = counts[i]!;
-              scores[slot]! +=
-                boost *
-                (BM25.d +
-                  (frequency * (BM25.k + 1)) / (frequency + flat + perWord * lengths[slot]!));
-              // The mark packs the last query word and the last group counted for the slot.
-              if (mark >> 16 !== sourceIndex) {
-                quality[slot]! += 1;
-                if ((mark & 0xffff) !== groupMark) groupsMet[slot]! += 1;
-                marks[slot] = sourceMark | groupMark;
-              }
-            }
-          }
-        }
+    let found: number[] | undefined;
+    this.inSearchOrder(groups, all).forEach((word, index) => {
+      if (!word.common) {
+        this.scorers(word, index, all, boosts, (scorer) => scorer.walk(touched, accept));
+        return;
       }
-    }
+      found ??= touched.filter((slot) => marks[slot] !== REJECTED).sort((a, b) => a - b);
+      this.scorers(word, index, all, boosts, (scorer) => scorer.probe(found!));
+    });
     for (const slot of touched) {
       if (marks[slot] !== REJECTED && (!all || groupsMet[slot] === groups.length)) {
         visit(slot, scores[slot]! * quality[slot]!);
@@ -290,6 +391,67 @@ export class CompactIndex {
       quality[slot] = 0;
       groupsMet[slot] = 0;
     }
+  }
+
+  /** Hands `use` a scorer for each posting of one query word, the `index`-th walked. */
+  private scorers(
+    word: SearchOrder,
+    index: number,
+    all: boolean,
+    boosts: readonly number[],
+    use: (scorer: PostingScorer) => void,
+  ): void {
+    for (const { term, weight } of word.source.derived) {
+      const fields = this.postings[this.termIds.get(term)!];
+      if (!fields) continue;
+      for (let field = 0; field < fields.length; field += 1) {
+        const posting = fields[field];
+        if (!posting || posting.live === 0) continue;
+        const idf = Math.log(1 + (this.liveCount - posting.live + 0.5) / (posting.live + 0.5));
+        const average = this.lengthSums[field]! / Math.max(1, this.liveCount);
+        use(
+          new PostingScorer(this.scratch, posting, this.lengths[field]!, {
+            boost: weight * boosts[field]! * idf,
+            perWord: (BM25.k * BM25.b) / average,
+            sourceIndex: index + 1,
+            groupMark: word.groupIndex + 1,
+            earlierGroups: all ? word.groupIndex : 0,
+          }),
+        );
+      }
+    }
+  }
+
+  /**
+   * The query words in the order they are walked, each with its group: as given; in an
+   * `any` search with common words, the rarer ones first.
+   */
+  private inSearchOrder(groups: readonly TermGroup[], all: boolean): SearchOrder[] {
+    const words = groups.flatMap((group, groupIndex) =>
+      group.map((source) => ({ groupIndex, source, common: false })),
+    );
+    if (all) return words;
+    const documents = words.map((word) => this.documentsWith(word.source));
+    const { share, floor, rarest } = this.commonWords;
+    const cutoff = Math.max(floor, share * this.liveCount);
+    const rarestCutoff = Math.max(floor, rarest * Math.min(...documents));
+    words.forEach((word, i) => {
+      word.common = documents[i]! > cutoff && documents[i]! > rarestCutoff;
+    });
+    return [...words.filter((word) => !word.common), ...words.filter((word) => word.common)];
+  }
+
+  /** About how many documents a query word finds: per word it stands for, its commonest field. */
+  private documentsWith(source: SourceTerm): number {
+    let documents = 0;
+    for (const { term } of source.derived) {
+      let most = 0;
+      for (const posting of this.postings[this.termIds.get(term)!] ?? []) {
+        most = Math.max(most, posting?.live ?? 0);
+      }
+      documents += most;
+    }
+    return documents;
   }
 
   /** Whether the document in `slot` has `term` in `field`. */
@@ -335,12 +497,15 @@ export class CompactIndex {
 
   /** Makes the per-slot arrays hold `slots` slots. */
   private grow(slots: number): void {
-    if (this.scores.length >= slots && this.lengths[0]!.length >= slots) return;
+    if (this.scratch.scores.length >= slots && this.lengths[0]!.length >= slots) return;
     const size = Math.max(1024, slots * 2);
-    this.scores = withRoom(this.scores, slots, size);
-    this.marks = withRoom(this.marks, slots, size);
-    this.quality = withRoom(this.quality, slots, size);
-    this.groupsMet = withRoom(this.groupsMet, slots, size);
+    const { scores, marks, quality, groupsMet } = this.scratch;
+    this.scratch = {
+      scores: withRoom(scores, slots, size),
+      marks: withRoom(marks, slots, size),
+      quality: withRoom(quality, slots, size),
+      groupsMet: withRoom(groupsMet, slots, size),
+    };
     for (let field = 0; field < this.fieldCount; field += 1) {
       this.lengths[field] = withRoom(this.lengths[field]!, slots, size);
     }
