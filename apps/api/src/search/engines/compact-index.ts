@@ -434,7 +434,8 @@ export class CompactIndex {
     const documents = words.map((word) => this.documentsWith(word.source));
     const { share, floor, rarest } = this.commonWords;
     const cutoff = Math.max(floor, share * this.liveCount);
-    const rarestCutoff = Math.max(floor, rarest * Math.min(...documents));
+    // A word the index lacks finds nothing: the rarest is the rarest word it has.
+    const rarestCutoff = Math.max(floor, rarest * Math.min(...documents.filter((n) => n > 0)));
     words.forEach((word, i) => {
       word.common = documents[i]! > cutoff && documents[i]! > rarestCutoff;
     });
