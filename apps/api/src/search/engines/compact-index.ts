@@ -337,9 +337,10 @@ export class CompactIndex {
         derived.push({ term, weight: (PREFIX_WEIGHT * term.length) / (term.length + 0.3 * extra) });
       }
     }
+    // Without typos, the exact word is all the index can have of it: no words to compare.
     for (
       let length = word.length - options.typos;
-      length <= word.length + options.typos;
+      options.typos > 0 && length <= word.length + options.typos;
       length += 1
     ) {
       for (const id of this.termsByLength.get(length) ?? []) {
