@@ -13,20 +13,14 @@ import { OutboxTable } from './outbox-table';
 import { outboxStateLabels } from './outbox-words';
 
 function StateTabs({ query, counts }: { query: OutboxQuery; counts: Record<OutboxState, number> }) {
-  const tab = (state: OutboxState | undefined, label: string, count: number) => ({
-    label,
-    count,
-    to: paths.app.outbox.getHref(outboxSearchParams({ state })),
-    active: query.state === state,
-  });
-  const all = outboxStates.reduce((sum, state) => sum + counts[state], 0);
   return (
     <CountTabNav
       label="Mails by state"
-      tabs={[
-        tab(undefined, 'All', all),
-        ...outboxStates.map((state) => tab(state, outboxStateLabels[state], counts[state])),
-      ]}
+      keys={outboxStates}
+      names={outboxStateLabels}
+      counts={counts}
+      current={query.state}
+      hrefOf={(state) => paths.app.outbox.getHref(outboxSearchParams({ state }))}
     />
   );
 }
