@@ -35,6 +35,7 @@ export interface EngineHit {
 export interface EngineResult {
   hits: EngineHit[];
   total: number;
+  /** Counts over the matches of an `all` search; empty for `any`. */
   facets: {
     type: Record<string, number>;
     status: Record<string, number>;

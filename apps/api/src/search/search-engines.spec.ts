@@ -207,6 +207,12 @@ describe.each([
     expect(await entityIds('volcanoes geothermal', { match: 'any' })).toEqual(
       expect.arrayContaining([ids.volcano, ids.core]),
     );
+    // Similar claims show no facets, so none are counted for them.
+    expect((await engine.search(query('volcanoes', { match: 'any' }))).facets).toEqual({
+      type: {},
+      status: {},
+      topics: {},
+    });
   });
 
   it('makes a write searchable at once, and forgets what is removed', async () => {

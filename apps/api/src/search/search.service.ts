@@ -63,7 +63,7 @@ export class SearchService {
       q: text,
       filters: { types: ['claim'] },
       offset: 0,
-      limit: SIMILAR_LIMIT * 3,
+      limit: SIMILAR_LIMIT,
       match: 'any',
     });
     const best = result.hits[0]?.score ?? 0;

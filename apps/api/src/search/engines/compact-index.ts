@@ -182,7 +182,7 @@ class PostingScorer {
   probe(found: readonly number[]): void {
     const { marks } = this;
     const { slots, counts, size } = this.posting;
-    if (found.length * 16 > size) {
+    if (found.length * 4 > size) {
       for (let i = 0; i < size; i += 1) {
         const slot = slots[i]!;
         const mark = marks[slot]!;

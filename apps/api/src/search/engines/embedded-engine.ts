@@ -144,7 +144,7 @@ export class EmbeddedSearchEngine extends SearchEngine {
 
   search(query: EngineQuery): Promise<EngineResult> {
     const groups = this.groupsOf(query.q, query.match);
-    const facets = this.columns.facets();
+    const facets = query.match === 'all' ? this.columns.facets() : null;
     const best = new BestOf(query.offset + query.limit);
     const accepted = this.columns.filter(query.filters);
     let total = 0;
@@ -155,7 +155,7 @@ export class EmbeddedSearchEngine extends SearchEngine {
       (slot) => this.documents[slot] !== undefined && accepted(slot),
       (slot, score) => {
         total += 1;
-        facets.add(slot);
+        facets?.add(slot);
         best.offer(slot, score, this.columns.dateOf(slot));
       },
     );
@@ -165,7 +165,7 @@ export class EmbeddedSearchEngine extends SearchEngine {
         .slice(query.offset)
         .map(({ slot, score }) => this.hitOf(slot, score, groups)),
       total,
-      facets: facets.result(),
+      facets: facets?.result() ?? { type: {}, status: {}, topics: {} },
     });
   }
 

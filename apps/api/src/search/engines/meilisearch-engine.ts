@@ -100,7 +100,7 @@ export class MeilisearchEngine extends SearchEngine {
   async search(query: EngineQuery): Promise<EngineResult> {
     const response = await this.index.search(query.q, {
       filter: filterOf(query.filters),
-      facets: ['type', 'status', 'topicList'],
+      facets: query.match === 'all' ? ['type', 'status', 'topicList'] : [],
       offset: query.offset,
       limit: query.limit,
       showMatchesPosition: true,
