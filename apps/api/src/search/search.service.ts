@@ -69,7 +69,6 @@ export class SearchService {
     const best = result.hits[0]?.score ?? 0;
     return result.hits
       .filter((hit) => hit.score >= best * SIMILAR_RELATIVE_FLOOR)
-      .slice(0, SIMILAR_LIMIT)
       .map(({ document, score }) => ({
         id: document.entityId,
         summary: document.title,

@@ -99,13 +99,7 @@ export interface Scored {
  * `floor` documents or fewer, so a small index is searched in full. Our choice, measured
  * with npm run bench.
  */
-export interface CommonWords {
-  share: number;
-  rarest: number;
-  floor: number;
-}
-
-const commonWordDefaults: CommonWords = { share: 0.05, rarest: 1.25, floor: 1_000 };
+const commonWords = { share: 0.05, rarest: 1.25, floor: 1_000 } as const;
 
 /** The per-slot arrays a search fills. */
 interface Scratch {
@@ -254,7 +248,6 @@ export class CompactIndex {
   constructor(
     private readonly fieldCount: number,
     private readonly tokenize: (text: string) => string[],
-    private readonly commonWords: CommonWords = commonWordDefaults,
   ) {
     this.lengths = Array.from({ length: fieldCount }, () => new Uint16Array(1024));
     this.lengthSums = Array.from({ length: fieldCount }, () => 0);
@@ -433,7 +426,7 @@ export class CompactIndex {
     );
     if (all) return words;
     const documents = words.map((word) => this.documentsWith(word.source));
-    const { share, floor, rarest } = this.commonWords;
+    const { share, floor, rarest } = commonWords;
     const cutoff = Math.max(floor, share * this.liveCount);
     // A word the index lacks finds nothing: the rarest is the rarest word it has.
     const rarestCutoff = Math.max(floor, rarest * Math.min(...documents.filter((n) => n > 0)));
