@@ -46,6 +46,8 @@ async function pickClaim(panel: Locator, summary: RegExp) {
     }
     await panel.getByRole('button', { name: 'Next page' }).click();
     await panel.getByText(new RegExp(`^Claims ${(page + 1) * 8 + 1}–`)).waitFor();
+    // The pager moves at once; the list keeps the previous page's rows until the next arrive.
+    await panel.locator('[role="radiogroup"]:not([aria-busy="true"])').waitFor();
   }
   throw new Error(`no claim ${summary} in the save panel`);
 }

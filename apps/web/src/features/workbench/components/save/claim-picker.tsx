@@ -56,6 +56,7 @@ export function ClaimPicker({ onPick }: { onPick: (claimId: string) => void }) {
             aria-labelledby={`${id}-label`}
             aria-describedby={`${id}-hint`}
             onValueChange={onPick}
+            aria-busy={claims.isPlaceholderData}
             className={claims.isPlaceholderData ? 'sl-wb-claims sl-busy' : 'sl-wb-claims'}
           >
             <Flex direction="column" gap="2">
