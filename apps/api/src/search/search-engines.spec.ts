@@ -109,7 +109,7 @@ const meiliHost = process.env.MEILI_TEST_HOST;
 
 describe.each([
   [
-    'the embedded engine (MiniSearch)',
+    'the embedded engine',
     () =>
       Promise.resolve({ engine: new EmbeddedSearchEngine() as SearchEngine, stop: async () => {} }),
   ],

@@ -11,6 +11,8 @@ import { SearchEngine } from './search-engine';
 @Injectable()
 export class SearchIndexService implements OnApplicationBootstrap {
   private readonly logger = new Logger(SearchIndexService.name);
+  /** Per rebuild under way, the updates made while it reads: done again once it is in. */
+  private readonly rebuilds = new Set<Array<() => Promise<void>>>();
 
   constructor(
     private readonly engine: SearchEngine,
@@ -27,11 +29,22 @@ export class SearchIndexService implements OnApplicationBootstrap {
     this.logger.log(`Search index built: ${count} documents in ${Date.now() - started} ms`);
   }
 
-  /** Reads every document from MariaDB and replaces the index with them. */
+  /**
+   * Reads every document from MariaDB and replaces the index with them. A write answered
+   * while the documents are read may be missing from them, or read before it: its update
+   * is made again once the new index is in, from what MariaDB holds then.
+   */
   async rebuild(): Promise<number> {
+    const updatedMeanwhile: Array<() => Promise<void>> = [];
+    this.rebuilds.add(updatedMeanwhile);
     const all: SearchDocument[] = [];
-    for await (const batch of this.documents.all()) all.push(...batch);
-    await this.engine.replaceAll(all);
+    try {
+      for await (const batch of this.documents.all()) all.push(...batch);
+      await this.engine.replaceAll(all);
+    } finally {
+      this.rebuilds.delete(updatedMeanwhile);
+    }
+    for (const update of updatedMeanwhile) await this.safely(update);
     return all.length;
   }
 
@@ -70,6 +83,7 @@ export class SearchIndexService implements OnApplicationBootstrap {
   }
 
   private async safely(work: () => Promise<void>): Promise<void> {
+    for (const updatedMeanwhile of this.rebuilds) updatedMeanwhile.push(work);
     try {
       await work();
     } catch (error) {
