@@ -1,4 +1,5 @@
 import { FakeMeilisearch } from '../../test/support/fake-meilisearch';
+import { claimDocument } from '../../test/support/search-documents';
 import { EmbeddedSearchEngine } from './engines/embedded-engine';
 import { MeilisearchEngine, meilisearchSettings } from './engines/meilisearch-engine';
 import { documentId, type SearchDocument } from './search-document';
@@ -6,28 +7,7 @@ import { type EngineQuery, type SearchEngine } from './search-engine';
 
 const day = (iso: string) => Date.parse(`${iso}T00:00:00Z`);
 
-function claim(
-  id: string,
-  fields: Partial<SearchDocument> & Pick<SearchDocument, 'title' | 'text'>,
-): SearchDocument {
-  return {
-    id: documentId('claim', id),
-    type: 'claim',
-    entityId: id,
-    claimant: 'Marrowby Weather Watchers',
-    topics: '',
-    topicList: [],
-    authors: '',
-    publisher: '',
-    body: '',
-    status: 'in_research',
-    rating: null,
-    date: day('2026-11-01'),
-    audience: 'desk',
-    ...fields,
-    ...(fields.topicList ? { topics: fields.topicList.join(' ') } : {}),
-  };
-}
+const claim = claimDocument;
 
 const ids = {
   core: '00000000-0000-4000-8000-000000000001',

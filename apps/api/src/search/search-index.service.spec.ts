@@ -1,27 +1,18 @@
 import { EmbeddedSearchEngine } from './engines/embedded-engine';
-import { documentId, type SearchDocument } from './search-document';
+import { claimDocument } from '../../test/support/search-documents';
+import { type SearchDocument } from './search-document';
 import { type SearchDocumentsReader } from './search-documents.reader';
 import { SearchIndexService } from './search-index.service';
 
 const claimId = '00000000-0000-4000-8000-0000000000a1';
 
-const claim = (title: string): SearchDocument => ({
-  id: documentId('claim', claimId),
-  type: 'claim',
-  entityId: claimId,
-  title,
-  text: title,
-  claimant: 'Wenlow Energy Forum',
-  topics: '',
-  topicList: [],
-  authors: '',
-  publisher: '',
-  body: '',
-  status: 'in_research',
-  rating: null,
-  date: Date.parse('2026-11-27T10:00:00Z'),
-  audience: 'desk',
-});
+const claim = (title: string) =>
+  claimDocument(claimId, {
+    title,
+    text: title,
+    claimant: 'Wenlow Energy Forum',
+    date: Date.parse('2026-11-27T10:00:00Z'),
+  });
 
 /**
  * MariaDB's side, held in memory: what `all()` reads is the claim as it was when the
