@@ -6,6 +6,7 @@ import {
   type SearchResponse,
   type SimilarClaim,
 } from '@skyledger/contracts';
+import { DeskFlow } from './support/desk-flow';
 import { FakeMeilisearch } from './support/fake-meilisearch';
 import { createTestApp, testPassword, type TestApp } from './support/test-app';
 
@@ -44,6 +45,11 @@ describe.each([
     const response = await t.http().get('/api/search').query(params).set(as(role));
     expect(response.status).toBe(200);
     return response.body as SearchResponse;
+  };
+  const similarTo = async (text: string) => {
+    const response = await t.http().get('/api/claims/similar').query({ text }).set(as('reporter'));
+    expect(response.status).toBe(200);
+    return response.body as SimilarClaim[];
   };
   const found = async (params: Record<string, string>) =>
     (await search(params)).items.map((item) => item.id);
@@ -164,13 +170,7 @@ describe.each([
   });
 
   it('shows earlier phrasings of a recurring claim while a new one is typed', async () => {
-    const response = await t
-      .http()
-      .get('/api/claims/similar')
-      .query({ text: 'Since 2016 the warming has stopped: no new global record' })
-      .set(as('reporter'));
-    expect(response.status).toBe(200);
-    const similar = response.body as SimilarClaim[];
+    const similar = await similarTo('Since 2016 the warming has stopped: no new global record');
     expect(
       similar
         .slice(0, 2)
@@ -180,6 +180,9 @@ describe.each([
     expect(similar.find((claim) => claim.id === paused.id)).toMatchObject({
       status: 'set_aside',
       summary: 'Warming has paused since 2016, says a reshared clip',
+      // Never published: no rating, no explainer.
+      rating: null,
+      explainerUrl: null,
     });
   });
 
@@ -212,5 +215,18 @@ describe.each([
     // Three claims and one source.
     expect(rebuilt.body).toMatchObject({ documents: 4 });
     expect(await found({ q: 'global warming stopped' })).toContain(stopped.id);
+  });
+
+  it('gives a published similar claim its rating and the address of its explainer', async () => {
+    const desk = await DeskFlow.start(t, 'published.search.test');
+    const core = await desk.clearedClaim('Heat from the Earth’s core is warming the planet');
+    const slug = await desk.publishNow(core.id);
+    const similar = await similarTo('The planet is warming because of heat from the core');
+    expect(similar[0]).toMatchObject({
+      id: core.id,
+      status: 'published',
+      rating: 'contradicted',
+      explainerUrl: expect.stringMatching(new RegExp(`/explainers/${slug}$`)),
+    });
   });
 });

@@ -2,7 +2,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 // The demo seed's own PNG writer, so the capture is a real picture and not a stand-in.
 import { encodePng, RgbImage } from '../../../seeds-demo/src/captures/png';
 import { expectAccessible, phone, screenshot, useBrowser, type Browser } from './support/browser';
-import { demo, signIn } from './support/desk';
+import { demo, openFilingForm, signIn } from './support/desk';
 import { openTab, pickOption } from './support/screens';
 
 // Invented for this test, like everything at the Marrowby Gazette.
@@ -26,9 +26,7 @@ describe('the claims desk', () => {
 
   it('lets a reporter file a claim with a PNG capture', async () => {
     const page = await browser.newPage();
-    await signIn(page, browser.baseUrl, demo.reporter.email);
-    await page.getByRole('link', { name: 'File a claim' }).click();
-    const form = page.getByRole('form', { name: 'File a claim' });
+    const form = await openFilingForm(page, browser.baseUrl);
     await form
       .getByLabel('The claim as it was said')
       .fill(

@@ -7,6 +7,7 @@ import { AppProvider } from '@/app/provider';
 import { SimilarClaimsPanel } from '@/features/search/components/similar-claims-panel';
 import { queryConfig } from '@/lib/query-client';
 import { mockApi, type MockReply, type RecordedRequest } from './api-mock';
+import { ratingLevels } from './verdict-fixtures';
 
 // The invented Marrowby Gazette desk has met this claim twice already.
 const similar: SimilarClaim[] = [
@@ -160,6 +161,33 @@ describe('similar claims panel', () => {
 
     expect(screen.queryByRole('listitem')).toBeNull();
     expect(screen.getByRole('status')).toHaveTextContent(/^$/);
+  });
+
+  it('gives a published claim its rating in words and a link to its explainer', async () => {
+    const published: SimilarClaim = {
+      ...similar[0]!,
+      status: 'published',
+      rating: 'contradicted',
+      explainerUrl: 'https://gazette.marrowby.test/explainers/global-warming-stopped-in-2016',
+    };
+    mockApi({
+      'GET /api/claims/similar': { status: 200, body: [published, similar[1]!] },
+      'GET /api/rating-levels': { status: 200, body: ratingLevels },
+    });
+    const { type } = renderPanel('');
+    type('Warming stopped in 2016');
+    await wait(300);
+    await realTime();
+
+    const [first, second] = await screen.findAllByRole('listitem');
+    await waitFor(() => expect(first).toHaveTextContent('Rated 5 · Contradicted by evidence'));
+    const explainer = within(first!).getByRole('link', {
+      name: 'Read the explainer (opens in a new tab)',
+    });
+    expect(explainer).toHaveAttribute('href', published.explainerUrl);
+    expect(explainer).toHaveAttribute('target', '_blank');
+    expect(second).not.toHaveTextContent('Rated');
+    expect(within(second!).queryByRole('link', { name: /Read the explainer/ })).toBeNull();
   });
 
   it('says when nothing similar is on the desk', async () => {

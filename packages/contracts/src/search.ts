@@ -73,7 +73,7 @@ export interface SimilarClaim {
   status: ClaimStatus;
   claimantName: string;
   filedAt: string;
-  /** Set once its explainer is published (verdicts and publishing issues). */
+  /** The rating level's id and the reader page, while its explainer is published. */
   rating: string | null;
   explainerUrl: string | null;
   score: number;

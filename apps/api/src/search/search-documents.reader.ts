@@ -110,6 +110,17 @@ export class SearchDocumentsReader {
     return publications.map(explainerDocument);
   }
 
+  /** The live explainer of each of these claims that has one: its slug and its rating. */
+  async liveExplainers(
+    claimIds: string[],
+  ): Promise<Array<{ claimId: string; slug: string; ratingId: string | null }>> {
+    if (claimIds.length === 0) return [];
+    return this.latestPublications()
+      .andWhere('p.claim_id IN (:...claimIds)', { claimIds })
+      .select(['claim.id AS claimId', 'claim.slug AS slug', 'version.rating_id AS ratingId'])
+      .getRawMany();
+  }
+
   /**
    * Every document, read in batches of 5 000 so memory stays flat at 100 000 claims.
    * Claims are read after the last id of the batch before (not by OFFSET, which rereads

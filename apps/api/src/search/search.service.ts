@@ -1,11 +1,14 @@
-import { Injectable } from '@nestjs/common';
+import { Inject, Injectable } from '@nestjs/common';
 import {
   SEARCH_PAGE_SIZE,
   type SearchHit,
   type SearchResponse,
   type SimilarClaim,
 } from '@skyledger/contracts';
+import { appConfig, type AppConfig } from '../config/configuration';
+import { explainerUrl } from '../publishing/publication-view';
 import { highlight, snippet } from './highlight';
+import { SearchDocumentsReader } from './search-documents.reader';
 import { type SearchField } from './search-document';
 import { SearchEngine, type EngineFilters, type EngineHit } from './search-engine';
 import { type SearchQueryDto } from './dto/search-query.dto';
@@ -42,7 +45,11 @@ function toSearchHit(hit: EngineHit): SearchHit {
 /** The desk's search, the reader search and similar claims, over the configured engine. */
 @Injectable()
 export class SearchService {
-  constructor(private readonly engine: SearchEngine) {}
+  constructor(
+    private readonly engine: SearchEngine,
+    private readonly documents: SearchDocumentsReader,
+    @Inject(appConfig.KEY) private readonly app: AppConfig,
+  ) {}
 
   /** Everything on the desk: claims, sources and explainers, with facets and highlights. */
   desk(query: SearchQueryDto): Promise<SearchResponse> {
@@ -56,7 +63,8 @@ export class SearchService {
 
   /**
    * The closest earlier claims to a text being typed, set-aside ones included: a claim
-   * set aside as a duplicate still tells the reporter the desk has seen it.
+   * set aside as a duplicate still tells the reporter the desk has seen it. A published
+   * one comes with its rating and the address of its explainer.
    */
   async similarClaims(text: string): Promise<SimilarClaim[]> {
     const result = await this.engine.search({
@@ -67,18 +75,29 @@ export class SearchService {
       match: 'any',
     });
     const best = result.hits[0]?.score ?? 0;
-    return result.hits
-      .filter((hit) => hit.score >= best * SIMILAR_RELATIVE_FLOOR)
-      .map(({ document, score }) => ({
+    const hits = result.hits.filter((hit) => hit.score >= best * SIMILAR_RELATIVE_FLOOR);
+    const explainers = new Map(
+      (
+        await this.documents.liveExplainers(
+          hits
+            .filter((hit) => hit.document.status === 'published')
+            .map((hit) => hit.document.entityId),
+        )
+      ).map((explainer) => [explainer.claimId, explainer]),
+    );
+    return hits.map(({ document, score }) => {
+      const explainer = explainers.get(document.entityId);
+      return {
         id: document.entityId,
         summary: document.title,
         status: document.status!,
         claimantName: document.claimant,
         filedAt: new Date(document.date).toISOString(),
-        rating: document.rating,
-        explainerUrl: null,
+        rating: explainer?.ratingId ?? null,
+        explainerUrl: explainer ? explainerUrl(this.app.appUrl, explainer.slug) : null,
         score,
-      }));
+      };
+    });
   }
 
   private async run(query: SearchQueryDto, fixed: EngineFilters): Promise<SearchResponse> {

@@ -1,4 +1,4 @@
-import { type Page } from 'playwright-core';
+import { type Locator, type Page } from 'playwright-core';
 
 export const demoPassword = 'skyledger-demo';
 
@@ -33,6 +33,20 @@ export async function signIn(
   await page.getByLabel('Password', { exact: true }).fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.getByRole('navigation', { name: 'Desk sections' }).waitFor();
+}
+
+/** Signs in and opens the filing form from the desk's navigation. */
+export async function openFilingForm(
+  page: Page,
+  baseUrl: string,
+  email: string = demo.reporter.email,
+): Promise<Locator> {
+  await signIn(page, baseUrl, email);
+  await page
+    .getByRole('navigation', { name: 'Desk sections' })
+    .getByRole('link', { name: 'File a claim' })
+    .click();
+  return page.getByRole('form', { name: 'File a claim' });
 }
 
 export async function navLinks(page: Page): Promise<string[]> {

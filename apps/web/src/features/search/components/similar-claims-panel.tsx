@@ -1,11 +1,16 @@
 import { ExternalLinkIcon } from '@radix-ui/react-icons';
-import { Card, Flex, Heading, Text, VisuallyHidden } from '@radix-ui/themes';
+import { Card, Flex, Heading, Link, Text, VisuallyHidden } from '@radix-ui/themes';
 import { SIMILAR_TEXT_MIN_LENGTH } from '@skyledger/contracts';
+import { useQuery } from '@tanstack/react-query';
 import { useId } from 'react';
 import { AppLink } from '@/components/ui/app-link';
 import { DateTime } from '@/components/ui/date-time';
 import { paths } from '@/config/paths';
 import { ClaimStatusBadge } from '@/features/claims/components/claim-status-badge';
+import {
+  ratingLevelName,
+  ratingLevelsQueryOptions,
+} from '@/features/rating-scale/api/get-rating-levels';
 import { errorMessage } from '@/lib/api-error-messages';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
 import { useSimilarClaims } from '../api/get-similar-claims';
@@ -14,6 +19,32 @@ import { useSimilarClaims } from '../api/get-similar-claims';
 export const SIMILAR_CLAIMS_DEBOUNCE_MS = 300;
 
 const claimsWord = (count: number) => (count === 1 ? 'claim' : 'claims');
+
+/** A published claim's rating in words and a link to its explainer. */
+function PublishedVerdict({
+  rating,
+  explainerUrl,
+}: {
+  rating: string | null;
+  explainerUrl: string;
+}) {
+  // Not suspended: the scale arriving late shows the level's id for a moment, not a blank form.
+  const levels = useQuery(ratingLevelsQueryOptions()).data;
+  const level = levels?.find((candidate) => candidate.id === rating);
+  return (
+    <Text size="2">
+      {rating ? (
+        <>
+          Rated <Text weight="bold">{level ? ratingLevelName(level) : rating}</Text> ·{' '}
+        </>
+      ) : null}
+      <Link href={explainerUrl} target="_blank" rel="noopener noreferrer">
+        Read the explainer <ExternalLinkIcon aria-hidden className="sl-inline-icon" />
+        <VisuallyHidden>(opens in a new tab)</VisuallyHidden>
+      </Link>
+    </Text>
+  );
+}
 
 /**
  * Earlier claims like the one being typed, so a reporter sees the desk has met it before.
@@ -77,6 +108,9 @@ export function SimilarClaimsPanel({ text }: { text: string }) {
                           <DateTime value={claim.filedAt} show="date" />
                         </Text>
                       </Flex>
+                      {claim.explainerUrl ? (
+                        <PublishedVerdict rating={claim.rating} explainerUrl={claim.explainerUrl} />
+                      ) : null}
                     </Flex>
                   </li>
                 ))}
