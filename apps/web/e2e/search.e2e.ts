@@ -85,30 +85,35 @@ describe('desk search', () => {
     await page.close();
   });
 
-  it('shows a reporter filing a claim the published check of it, rated, with its explainer', async () => {
-    const page = await browser.newPage();
-    const form = await openFilingForm(page, browser.baseUrl);
-    await form
-      .getByLabel('The claim as it was said')
-      .fill('The heat of the Earth’s molten core is what is warming the planet.');
-    const similar = form.getByRole('region', { name: 'Already on the desk?' });
-    // The demo desk published this claim's explainer, rated contradicted, and corrected it.
-    const item = similar
-      .getByRole('listitem')
-      .filter({ hasText: 'Earth’s core, not greenhouse gases, is warming the planet' });
-    await item.getByText(/^Rated \d · /).waitFor();
-    expect(await item.getByText('Published').count()).toBeGreaterThan(0);
-    const explainer = item.getByRole('link', { name: 'Read the explainer (opens in a new tab)' });
-    const href = await explainer.getAttribute('href');
-    expect(href).toMatch(/\/explainers\/[a-z0-9-]+$/);
-    await expectAccessible(page);
-    await screenshot(page, 'similar-claims-published');
+  it('shows a reporter filing a claim the published check of it, rated, with its explainer, at both widths', async () => {
+    for (const [name, viewport] of [
+      ['desktop', desktop],
+      ['phone', phone],
+    ] as const) {
+      const page = await browser.newPage(viewport);
+      const form = await openFilingForm(page, browser.baseUrl);
+      await form
+        .getByLabel('The claim as it was said')
+        .fill('The heat of the Earth’s molten core is what is warming the planet.');
+      const similar = form.getByRole('region', { name: 'Already on the desk?' });
+      // The demo desk published this claim's explainer, rated contradicted, and corrected it.
+      const item = similar
+        .getByRole('listitem')
+        .filter({ hasText: 'Earth’s core, not greenhouse gases, is warming the planet' });
+      await item.getByText(/^Rated \d · /).waitFor();
+      expect(await item.getByText('Published').count()).toBeGreaterThan(0);
+      const explainer = item.getByRole('link', { name: 'Read the explainer (opens in a new tab)' });
+      const href = await explainer.getAttribute('href');
+      expect(href).toMatch(/\/explainers\/[a-z0-9-]+$/);
+      await expectAccessible(page);
+      await screenshot(page, `similar-claims-published-${name}`);
 
-    await page.goto(href!);
-    await page
-      .getByRole('heading', { level: 1, name: /Earth’s core, not greenhouse gases/ })
-      .waitFor();
-    await page.close();
+      await page.goto(href!);
+      await page
+        .getByRole('heading', { level: 1, name: /Earth’s core, not greenhouse gases/ })
+        .waitFor();
+      await page.close();
+    }
   });
 
   it('offers a reporter no rebuild', async () => {
