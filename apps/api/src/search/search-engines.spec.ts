@@ -232,4 +232,28 @@ describe('the Meilisearch engine and the server it talks to', () => {
     expect(fake.requests.filter((request) => request === 'POST /indexes')).toHaveLength(1);
     expect(fake.settingsOf('skyledger_settings')).toMatchObject(meilisearchSettings);
   });
+
+  it('rebuilds in a second index and swaps it in, never emptying the one searched', async () => {
+    const engine = new MeilisearchEngine({ host: fake.host, index: 'skyledger_swap' });
+    await engine.start();
+    const [old, renewed] = documents;
+    await engine.upsert([old!]);
+    await engine.replaceAll([renewed!]);
+
+    const found = await engine.search(query('brighter'));
+    expect(found.hits.map((hit) => hit.document.id)).toEqual([renewed!.id]);
+    expect(await engine.count()).toBe(1);
+    expect(fake.requests).toContain('POST /swap-indexes');
+    expect(fake.requests).not.toContain('DELETE /indexes/skyledger_swap/documents');
+    expect(fake.settingsOf('skyledger_swap')).toMatchObject(meilisearchSettings);
+    expect(fake.settingsOf('skyledger_swap_rebuild')).toBeUndefined();
+  });
+
+  it('makes a task the server could not carry out an error, not silence', async () => {
+    // Never started, so its index does not exist: the deletion is accepted, then fails.
+    const engine = new MeilisearchEngine({ host: fake.host, index: 'skyledger_missing' });
+    await expect(engine.remove([documentId('claim', ids.core)])).rejects.toThrow(
+      /Meilisearch task \d+ \(documentDeletion\) failed: Index `skyledger_missing` not found/,
+    );
+  });
 });

@@ -4,7 +4,8 @@ import { type AddressInfo } from 'node:net';
 
 /**
  * A small stand-in for a Meilisearch server: the few HTTP endpoints the official client
- * calls for Skyledger (indexes, settings, documents, tasks, stats, search), on 127.0.0.1.
+ * calls for Skyledger (indexes, settings, documents, tasks, stats, search, swapping two
+ * indexes), on 127.0.0.1.
  * The Meilisearch server cannot be installed on this machine, so the engine's tests run
  * here; set MEILI_TEST_HOST to run the same suites against a real one.
  *
@@ -163,6 +164,19 @@ export class FakeMeilisearch {
       if (!task) throw new MeiliError(404, `Task \`${uid}\` not found.`, 'task_not_found');
       return [200, { uid: task.taskUid, ...task }];
     }
+    if (root === 'swap-indexes' && method === 'POST') {
+      return this.task('', 'indexSwap', () => {
+        for (const { indexes } of body as Array<{ indexes: [string, string] }>) {
+          const [first, second] = indexes.map((id) => {
+            const found = this.indexes.get(id);
+            if (!found) throw new MeiliError(404, `Index \`${id}\` not found.`, 'index_not_found');
+            return found;
+          });
+          this.indexes.set(first!.uid, { ...second!, uid: first!.uid });
+          this.indexes.set(second!.uid, { ...first!, uid: second!.uid });
+        }
+      });
+    }
     if (root !== 'indexes') throw new MeiliError(404, 'Not found', 'not_found');
     if (!uid && method === 'GET') {
       const results = [...this.indexes.values()].map(({ uid: id, primaryKey }) => ({
@@ -190,6 +204,12 @@ export class FakeMeilisearch {
       if (!index) throw new MeiliError(404, `Index \`${uid}\` not found.`, 'index_not_found');
       return index;
     };
+    if (!sub && method === 'DELETE') {
+      return this.task(uid!, 'indexDeletion', () => {
+        need();
+        this.indexes.delete(uid!);
+      });
+    }
     if (sub === 'settings' && method === 'PATCH') {
       return this.task(uid!, 'settingsUpdate', () => {
         const target = need();

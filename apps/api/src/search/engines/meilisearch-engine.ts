@@ -1,4 +1,10 @@
-import { Meilisearch, type Filter, type Hit, type Index } from 'meilisearch';
+import {
+  Meilisearch,
+  type EnqueuedTaskPromise,
+  type Filter,
+  type Hit,
+  type Index,
+} from 'meilisearch';
 import { normaliseTerm } from '../normalise-term';
 import {
   searchFieldNames,
@@ -58,6 +64,16 @@ function matchedTerms(hit: Hit<SearchDocument>): EngineHit['matchedTerms'] {
   return terms;
 }
 
+/** Waits for a task, and makes one that did not succeed an error: the client returns it either way. */
+async function finished(enqueued: EnqueuedTaskPromise): Promise<void> {
+  const task = await enqueued.waitTask();
+  if (task.status !== 'succeeded') {
+    throw new Error(
+      `Meilisearch task ${task.uid} (${task.type}) ${task.status}: ${task.error?.message ?? 'no reason given'}`,
+    );
+  }
+}
+
 /** The engine for several API instances: one Meilisearch index they all share. */
 export class MeilisearchEngine extends SearchEngine {
   readonly persistent = true;
@@ -73,24 +89,37 @@ export class MeilisearchEngine extends SearchEngine {
   async start(): Promise<void> {
     const indexes = await this.client.getIndexes({ limit: 1000 });
     if (!indexes.results.some((index) => index.uid === this.options.index)) {
-      await this.client.createIndex(this.options.index, { primaryKey: 'id' }).waitTask();
+      await finished(this.client.createIndex(this.options.index, { primaryKey: 'id' }));
     }
-    await this.index.updateSettings(meilisearchSettings).waitTask();
+    await finished(this.index.updateSettings(meilisearchSettings));
   }
 
+  /**
+   * Fills a second index and swaps it in, so searches meanwhile see the whole of the
+   * old one, never a half-filled index; the old documents go with the second index.
+   */
   async replaceAll(documents: SearchDocument[]): Promise<void> {
-    await this.index.deleteAllDocuments().waitTask();
+    const staging = `${this.options.index}_rebuild`;
+    // Left behind by a rebuild that stopped half-way, if any.
+    await this.client.deleteIndexIfExists(staging);
+    await finished(this.client.createIndex(staging, { primaryKey: 'id' }));
+    const next = this.client.index<SearchDocument>(staging);
+    await finished(next.updateSettings(meilisearchSettings));
     for (let start = 0; start < documents.length; start += 10_000) {
-      await this.index.addDocuments(documents.slice(start, start + 10_000)).waitTask();
+      await finished(next.addDocuments(documents.slice(start, start + 10_000)));
     }
+    await finished(
+      this.client.swapIndexes([{ indexes: [this.options.index, staging], rename: false }]),
+    );
+    await finished(this.client.deleteIndex(staging));
   }
 
   async upsert(documents: SearchDocument[]): Promise<void> {
-    if (documents.length) await this.index.addDocuments(documents).waitTask();
+    if (documents.length) await finished(this.index.addDocuments(documents));
   }
 
   async remove(ids: string[]): Promise<void> {
-    if (ids.length) await this.index.deleteDocuments(ids).waitTask();
+    if (ids.length) await finished(this.index.deleteDocuments(ids));
   }
 
   async count(): Promise<number> {
