@@ -4,6 +4,7 @@ import {
   type Filter,
   type Hit,
   type Index,
+  type IndexSwap,
 } from 'meilisearch';
 import { normaliseTerm } from '../normalise-term';
 import {
@@ -108,9 +109,10 @@ export class MeilisearchEngine extends SearchEngine {
     for (let start = 0; start < documents.length; start += 10_000) {
       await finished(next.addDocuments(documents.slice(start, start + 10_000)));
     }
-    await finished(
-      this.client.swapIndexes([{ indexes: [this.options.index, staging], rename: false }]),
-    );
+    // `rename` (Meilisearch 1.18) is left out: a swap is what it means when absent, and an
+    // older server may refuse a field it does not know.
+    const swap = { indexes: [this.options.index, staging] } as IndexSwap;
+    await finished(this.client.swapIndexes([swap]));
     await finished(this.client.deleteIndex(staging));
   }
 
