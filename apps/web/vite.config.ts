@@ -5,7 +5,11 @@ import { defineConfig } from 'vitest/config';
 export default defineConfig({
   plugins: [react()],
   resolve: {
-    alias: { '@': new URL('./src', import.meta.url).pathname },
+    alias: [
+      { find: '@', replacement: new URL('./src', import.meta.url).pathname },
+      // Zod without its eval probe, set before any schema is defined (src/lib/zod-jitless.ts).
+      { find: /^zod$/, replacement: new URL('./src/lib/zod-jitless.ts', import.meta.url).pathname },
+    ],
     // Workspace packages export their TypeScript under the `source` condition, so dev,
     // build and tests read packages/contracts/src with no prior build.
     conditions: ['source', ...defaultClientConditions],

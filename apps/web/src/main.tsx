@@ -1,4 +1,3 @@
-import './lib/zod-without-eval';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router-dom';
