@@ -1,11 +1,10 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import {
-  desktop,
   expectAccessible,
-  phone,
   screenshot,
   useBrowser,
   type Browser,
+  bothWidths,
 } from './support/browser';
 import { demo, openFilingForm, signIn } from './support/desk';
 
@@ -21,10 +20,7 @@ describe('desk search', () => {
   });
 
   it('finds both phrasings, filters by a status facet through the URL, and passes axe at both widths', async () => {
-    for (const [name, viewport] of [
-      ['desktop', desktop],
-      ['phone', phone],
-    ] as const) {
+    for (const [name, viewport] of bothWidths) {
       const page = await browser.newPage(viewport);
       await signIn(page, browser.baseUrl, demo.science_editor.email);
       await page
@@ -86,10 +82,7 @@ describe('desk search', () => {
   });
 
   it('shows a reporter filing a claim the published check of it, rated, with its explainer, at both widths', async () => {
-    for (const [name, viewport] of [
-      ['desktop', desktop],
-      ['phone', phone],
-    ] as const) {
+    for (const [name, viewport] of bothWidths) {
       const page = await browser.newPage(viewport);
       const form = await openFilingForm(page, browser.baseUrl);
       await form

@@ -1,12 +1,12 @@
 import { roles, type Role } from '@skyledger/contracts';
 import { beforeEach, describe, expect, it } from 'vitest';
 import {
-  desktop,
   expectAccessible,
   useBrowser,
   phone,
   screenshot,
   type Browser,
+  bothWidths,
 } from './support/browser';
 import { demo, navLinks, signIn } from './support/desk';
 
@@ -18,10 +18,7 @@ describe('signing in to the desk', () => {
   });
 
   it('sends a signed-out visitor to the sign-in page, which passes axe at both widths', async () => {
-    for (const [name, viewport] of [
-      ['desktop', desktop],
-      ['phone', phone],
-    ] as const) {
+    for (const [name, viewport] of bothWidths) {
       const page = await browser.newPage(viewport);
       await page.goto(`${browser.baseUrl}/people`);
       await page.getByRole('button', { name: 'Sign in' }).waitFor();

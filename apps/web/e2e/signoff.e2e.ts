@@ -6,6 +6,7 @@ import {
   screenshot,
   useBrowser,
   type Browser,
+  bothWidths,
 } from './support/browser';
 import { demo, deskApi, signIn } from './support/desk';
 import { waitForMail } from './support/mailbox';
@@ -235,10 +236,7 @@ describe('verdicts and sign-off', () => {
       { path: '/audit', heading: 'Audit trail', name: 'audit' },
       { path: '/account', heading: 'Your account', name: 'account' },
     ];
-    for (const [size, viewport] of [
-      ['desktop', desktop],
-      ['phone', phone],
-    ] as const) {
+    for (const [size, viewport] of bothWidths) {
       const page = await browser.newPage(viewport);
       await signIn(page, browser.baseUrl, demo.desk_chief.email);
       for (const { path, heading, name } of screens) {

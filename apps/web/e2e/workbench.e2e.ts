@@ -7,6 +7,7 @@ import {
   screenshot,
   useBrowser,
   type Browser,
+  bothWidths,
 } from './support/browser';
 import { demo, signIn } from './support/desk';
 import { pickOption } from './support/screens';
@@ -98,10 +99,7 @@ describe('the workbench', () => {
   });
 
   it('runs a trend on a SYNTHETIC dataset from 2016 and saves it, at desktop and phone widths', async () => {
-    for (const [name, viewport] of [
-      ['desktop', desktop],
-      ['phone', phone],
-    ] as const) {
+    for (const [name, viewport] of bothWidths) {
       const page = await browser.newPage(viewport);
       await signIn(page, browser.baseUrl, demo.science_editor.email);
       await openCalculator(page, 'Trend with an honest interval');

@@ -76,14 +76,11 @@ export class SearchService {
     });
     const best = result.hits[0]?.score ?? 0;
     const hits = result.hits.filter((hit) => hit.score >= best * SIMILAR_RELATIVE_FLOOR);
+    const published = hits
+      .filter((hit) => hit.document.status === 'published')
+      .map((hit) => hit.document.entityId);
     const explainers = new Map(
-      (
-        await this.documents.liveExplainers(
-          hits
-            .filter((hit) => hit.document.status === 'published')
-            .map((hit) => hit.document.entityId),
-        )
-      ).map((explainer) => [explainer.claimId, explainer]),
+      (await this.documents.liveExplainers(published)).map((live) => [live.claimId, live]),
     );
     return hits.map(({ document, score }) => {
       const explainer = explainers.get(document.entityId);

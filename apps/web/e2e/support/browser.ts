@@ -7,6 +7,11 @@ import { afterAll, beforeAll, expect, inject } from 'vitest';
 
 export const desktop = { width: 1280, height: 860 };
 export const phone = { width: 375, height: 740 };
+/** The two widths every screen is checked at, named for screenshots. */
+export const bothWidths = [
+  ['desktop', desktop],
+  ['phone', phone],
+] as const;
 export const screenshotDir = join(tmpDir, 'screens');
 
 export interface Browser {
