@@ -45,15 +45,28 @@ export function latencyOf(samples: number[]): Latency {
   return { p50: percentile(sorted, 50), p95: percentile(sorted, 95), p99: percentile(sorted, 99) };
 }
 
+/** What one autocannon run collected, before it is summed up. */
+interface Samples {
+  latencies: number[];
+  bytes: number;
+  failures: number;
+  failedStatuses: Set<number>;
+  seconds: number;
+}
+
 function fire(
   baseUrl: string,
   requests: readonly RequestSpec[],
   connections: number,
   seconds: number,
-): Promise<LoadResult> {
-  const latencies: number[] = [];
-  const failedStatuses = new Set<number>();
-  let bytes = 0;
+): Promise<Samples> {
+  const samples: Samples = {
+    latencies: [],
+    bytes: 0,
+    failures: 0,
+    failedStatuses: new Set<number>(),
+    seconds,
+  };
   return new Promise((resolve, reject) => {
     // One shared turn for every connection, so requests in flight at once differ (two
     // saves on one claim would only wait for each other's lock).
@@ -83,25 +96,34 @@ function fire(
       },
       (error: unknown, result: autocannon.Result) => {
         if (error) return reject(error instanceof Error ? error : new Error(String(error)));
-        resolve({
-          ...latencyOf(latencies),
-          requests: latencies.length,
-          perSecond: latencies.length / seconds,
-          // autocannon counts a timeout among its errors too.
-          failures: result.non2xx + result.errors,
-          failedStatuses: [...failedStatuses],
-          bytes: latencies.length ? bytes / latencies.length : 0,
-        });
+        // autocannon counts a timeout among its errors too.
+        samples.failures = result.non2xx + result.errors;
+        resolve(samples);
       },
     );
     instance.on('response', (_client, statusCode, resBytes, responseTime) => {
       // Only answers count; a failure is counted by autocannon and voids the run.
       if (statusCode >= 200 && statusCode < 300) {
-        latencies.push(responseTime);
-        bytes += resBytes;
-      } else failedStatuses.add(statusCode);
+        samples.latencies.push(responseTime);
+        samples.bytes += resBytes;
+      } else samples.failedStatuses.add(statusCode);
     });
   });
+}
+
+/** The figures of one or more runs of the same requests, pooled. */
+function summarise(runs: readonly Samples[]): LoadResult {
+  const latencies = runs.flatMap((run) => run.latencies);
+  const seconds = runs.reduce((sum, run) => sum + run.seconds, 0);
+  const bytes = runs.reduce((sum, run) => sum + run.bytes, 0);
+  return {
+    ...latencyOf(latencies),
+    requests: latencies.length,
+    perSecond: latencies.length / seconds,
+    failures: runs.reduce((sum, run) => sum + run.failures, 0),
+    failedStatuses: [...new Set(runs.flatMap((run) => [...run.failedStatuses]))],
+    bytes: latencies.length ? bytes / latencies.length : 0,
+  };
 }
 
 /**
@@ -115,5 +137,29 @@ export async function load(
   options: LoadOptions,
 ): Promise<LoadResult> {
   await fire(baseUrl, requests, options.connections, options.warmupSeconds);
-  return fire(baseUrl, requests, options.connections, options.seconds);
+  return summarise([await fire(baseUrl, requests, options.connections, options.seconds)]);
+}
+
+/**
+ * Paths measured in turns (a path, its reference, a path, its reference …, in `rounds`
+ * slices of the run's length each), each one's slices pooled. The machine's neighbours
+ * take a share of its cores that comes and goes within a minute; measured one after the
+ * other, either side could get the quiet stretch and the ratio would swing with it.
+ */
+export async function loadInTurns<Sides extends ReadonlyArray<readonly RequestSpec[]>>(
+  baseUrl: string,
+  sides: readonly [...Sides],
+  options: LoadOptions & { rounds: number },
+): Promise<{ [K in keyof Sides]: LoadResult }> {
+  for (const requests of sides) {
+    await fire(baseUrl, requests, options.connections, options.warmupSeconds);
+  }
+  const runs = sides.map((): Samples[] => []);
+  const slice = options.seconds / options.rounds;
+  for (let round = 0; round < options.rounds; round += 1) {
+    for (const [side, requests] of sides.entries()) {
+      runs[side]!.push(await fire(baseUrl, requests, options.connections, slice));
+    }
+  }
+  return runs.map(summarise) as { [K in keyof Sides]: LoadResult };
 }

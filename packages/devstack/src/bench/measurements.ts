@@ -1,7 +1,7 @@
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { type BenchStack } from './bench-stack.js';
-import { load, type LoadResult, type RequestSpec } from './load.js';
+import { load, loadInTurns, type LoadResult, type RequestSpec } from './load.js';
 import { connections, type BenchPlan } from './plan.js';
 import { type BenchRow } from './report.js';
 import {
@@ -70,12 +70,21 @@ export class Measurements {
     });
   }
 
-  private get(path: string): RequestSpec {
-    return { path, headers: this.stack.headers };
+  /** Requests measured in turns with their references (`loadInTurns`). */
+  private inTurns<Sides extends ReadonlyArray<readonly RequestSpec[]>>(
+    sides: readonly [...Sides],
+    connections: number,
+  ) {
+    return loadInTurns(this.stack.baseUrl, sides, {
+      connections,
+      seconds: this.plan.seconds,
+      warmupSeconds: this.plan.warmupSeconds,
+      rounds: this.plan.rounds,
+    });
   }
 
-  private ping(connections: number) {
-    return this.load([{ path: '/api/bench/ping' }], connections);
+  private get(path: string): RequestSpec {
+    return { path, headers: this.stack.headers };
   }
 
   /**
@@ -83,32 +92,33 @@ export class Measurements {
    * page at the latency connections, each against the trivial route at the same.
    */
   async desk(): Promise<BenchRow[]> {
-    const reference = { name: 'trivial JSON route', run: await this.ping(connections.throughput) };
-    const queue = await this.load(
+    const ping = [{ path: '/api/bench/ping' }];
+    // With the floor under any signed-in route (the token, the account's status), which the
+    // trivial route skips: the queue's reference does no sign-in at all.
+    const [queue, pinged, signedIn] = await this.inTurns(
       [
-        'status=in_research&topic=solar&sort=updatedAt&order=desc',
-        'status=published&topic=sea-level&sort=filedAt&order=desc',
-        'status=awaiting_signoff&legal=false&sort=summary&order=asc',
-      ].map((filters) => this.get(`/api/claims?${filters}&pageSize=25`)),
+        [
+          'status=in_research&topic=solar&sort=updatedAt&order=desc',
+          'status=published&topic=sea-level&sort=filedAt&order=desc',
+          'status=awaiting_signoff&legal=false&sort=summary&order=asc',
+        ].map((filters) => this.get(`/api/claims?${filters}&pageSize=25`)),
+        ping,
+        [this.get('/api/me')],
+      ],
       connections.throughput,
     );
+    const reference = { name: 'trivial JSON route', run: pinged };
     const throughput = queue.perSecond / reference.run.perSecond;
-    // The floor under any signed-in route (the token, the account's status), which the
-    // trivial route skips: the queue's reference does no sign-in at all.
-    const signedIn = await this.load([this.get('/api/me')], connections.throughput);
     const queueFailures = failureNote(queue, reference.run);
     const floor =
       failureNote(signedIn) ??
       `GET /api/me, signed in and reading one user, ${Math.round(signedIn.perSecond)} req/s ` +
         `(${(signedIn.perSecond / reference.run.perSecond).toFixed(2)}×), p95 ${signedIn.p95.toFixed(1)} ms`;
-    const claimPage = await this.load(
-      this.stack.samples.claimIds.map((id) => this.get(`/api/claims/${id}`)),
+    const [claimPage, claimPinged] = await this.inTurns(
+      [this.stack.samples.claimIds.map((id) => this.get(`/api/claims/${id}`)), ping],
       connections.latency,
     );
-    const claimReference = {
-      name: reference.name,
-      run: await this.ping(connections.latency),
-    };
+    const claimReference = { name: reference.name, run: claimPinged };
     const figure = `p95, ${connections.throughput} connections`;
     return [
       latencyRow(
@@ -248,12 +258,8 @@ export class Measurements {
 
   private async readerRow(path: string, pages: readonly string[], name: string, limit: number) {
     const twins = await this.staticTwins(pages, name);
-    const page = await this.load(
-      pages.map((page) => ({ path: page })),
-      connections.latency,
-    );
-    const file = await this.load(
-      twins.map((twin) => ({ path: twin })),
+    const [page, file] = await this.inTurns(
+      [pages.map((page) => ({ path: page })), twins.map((twin) => ({ path: twin }))],
       connections.latency,
     );
     return latencyRow(
@@ -335,17 +341,16 @@ export class Measurements {
   /** Saving a working (the server's recomputation included) against the calculator run alone. */
   async workings(): Promise<BenchRow> {
     const inputs = { inputs: {} };
-    const save = await this.load(
-      this.stack.samples.researchIds.map((id) => ({
-        method: 'POST',
-        path: `/api/claims/${id}/workings`,
-        headers: this.stack.headers,
-        body: { calculatorId: 'energy-balance', ...inputs },
-      })),
-      connections.latency,
-    );
-    const run = await this.load(
-      [{ method: 'POST', path: '/api/calculators/energy-balance/run', body: inputs }],
+    const [save, run] = await this.inTurns(
+      [
+        this.stack.samples.researchIds.map((id) => ({
+          method: 'POST' as const,
+          path: `/api/claims/${id}/workings`,
+          headers: this.stack.headers,
+          body: { calculatorId: 'energy-balance', ...inputs },
+        })),
+        [{ method: 'POST', path: '/api/calculators/energy-balance/run', body: inputs }],
+      ],
       connections.latency,
     );
     const overhead = save.p95 - run.p95;

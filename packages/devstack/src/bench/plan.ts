@@ -6,11 +6,20 @@ export interface BenchPlan {
   /** Length of each measured run, after a warm-up run of `warmupSeconds`. */
   seconds: number;
   warmupSeconds: number;
+  /** Slices a path and its reference take turns in (`loadSideBySide`). */
+  rounds: number;
 }
 
 export const benchPlans: Record<BenchPlan['mode'], BenchPlan> = {
-  full: { mode: 'full', claims: 100_000, explainers: 5_000, seconds: 10, warmupSeconds: 2 },
-  quick: { mode: 'quick', claims: 5_000, explainers: 500, seconds: 3, warmupSeconds: 1 },
+  full: {
+    mode: 'full',
+    claims: 100_000,
+    explainers: 5_000,
+    seconds: 10,
+    warmupSeconds: 2,
+    rounds: 5,
+  },
+  quick: { mode: 'quick', claims: 5_000, explainers: 500, seconds: 3, warmupSeconds: 1, rounds: 3 },
 };
 
 /**
