@@ -32,6 +32,10 @@ describe('verdicts, the claim life and sign-off', () => {
   /** A claim researched by `editor`, with a strong source, a reply attempt and a working. */
   async function researchedClaim(
     summary: string,
+    claimant: { name: string; kind: string } = {
+      name: `Claimant of ${summary}`,
+      kind: 'public_figure',
+    },
   ): Promise<{ claim: ClaimDetail; sourceId: string; workingId: string }> {
     const filed = await t
       .http()
@@ -41,7 +45,7 @@ describe('verdicts, the claim life and sign-off', () => {
         text: `${summary}, said at the harbour meeting.`,
         summary,
         topics: ['geothermal'],
-        claimant: { name: `Claimant of ${summary}`, kind: 'public_figure' },
+        claimant,
       });
     expect(filed.status).toBe(201);
     const claim = filed.body as ClaimDetail;
@@ -230,12 +234,26 @@ describe('verdicts, the claim life and sign-off', () => {
       const headings = [...version.bodyHtml.matchAll(/<h2>([^<]+)<\/h2>/g)].map((m) => m[1]);
       expect(headings).toEqual(['What the evidence shows', 'The claim', 'Why it misleads']);
       expect(version.bodyHtml).toContain(claim.text);
+      expect(version.bodyHtml).toContain('Claimant of The template leads with the fact');
       const again = await draft(claim.id, 'chief');
       expect(again.status).toBe(409);
       expect(again.body.fields).toEqual({ verdict: 'draftExists' });
       for (const who of ['reporter', 'copy'] as const) {
         expect((await draft(claim.id, who)).status).toBe(403);
       }
+    });
+
+    it('names a private individual in the template only as readers may see them', async () => {
+      const { claim } = await researchedClaim('A neighbour’s claim about the core', {
+        name: 'Winifred Oddlestone',
+        kind: 'private_individual',
+      });
+      const started = await draft(claim.id, 'editor');
+      expect(started.status).toBe(201);
+      const { bodyHtml } = started.body as VerdictVersionView;
+      // Left as it is, the template's line would be published: the name must not be in it.
+      expect(bodyHtml).not.toContain('Winifred Oddlestone');
+      expect(bodyHtml).toContain('Who said it (A private individual), where and when.');
     });
 
     it('renders citations and embedded workings, and strips scripts and javascript: links', async () => {

@@ -12,3 +12,17 @@ export function toClaimantView(claimant: Claimant): ClaimantView {
     version: claimant.version,
   };
 }
+
+/**
+ * What readers may see of a claimant: a private individual's name only when allowed. Also
+ * what the explainer template names, so an unedited template cannot publish the name.
+ */
+export function claimantForReaders(claimant: Claimant) {
+  const hidden = claimant.kind === 'private_individual' && !claimant.nameShownPublicly;
+  return {
+    name: hidden ? null : claimant.name,
+    displayName: hidden ? 'A private individual' : claimant.name,
+    kind: claimant.kind,
+    affiliation: hidden ? null : claimant.affiliation,
+  };
+}

@@ -16,7 +16,7 @@ import { citedSourceIds, embeddedWorkingIds } from '@skyledger/explainer';
 import { DataSource, In, LessThanOrEqual } from 'typeorm';
 import { Appearance } from '../appearances/entities/appearance.entity';
 import { Attachment } from '../attachments/entities/attachment.entity';
-import { type Claimant } from '../claimants/entities/claimant.entity';
+import { claimantForReaders } from '../claimants/claimant-view';
 import { Claim } from '../claims/entities/claim.entity';
 import { appConfig, type AppConfig } from '../config/configuration';
 import { Dataset } from '../datasets/entities/dataset.entity';
@@ -28,17 +28,6 @@ import { Working } from '../workings/entities/working.entity';
 import { toReaderWorking } from './reader-working';
 
 export const READER_PAGE_SIZE = 20;
-
-/** What readers may see of a claimant: a private individual's name only when allowed. */
-export function claimantForReaders(claimant: Claimant) {
-  const hidden = claimant.kind === 'private_individual' && !claimant.nameShownPublicly;
-  return {
-    name: hidden ? null : claimant.name,
-    displayName: hidden ? 'A private individual' : claimant.name,
-    kind: claimant.kind,
-    affiliation: hidden ? null : claimant.affiliation,
-  };
-}
 
 /**
  * The reader side's read models, built only from published publications whose time has

@@ -5,6 +5,7 @@ import { explainerTemplate, type ExplainerDocument } from '@skyledger/explainer'
 import { DataSource, type EntityManager } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { type AuthenticatedUser } from '../auth/authenticated-user';
+import { claimantForReaders } from '../claimants/claimant-view';
 import { Claimant } from '../claimants/entities/claimant.entity';
 import { claimRoles } from '../claims/claim-policy';
 import { ClaimsService } from '../claims/claims.service';
@@ -261,7 +262,10 @@ export class VerdictsService {
 
   private async template(manager: EntityManager, claim: Claim): Promise<ExplainerDocument> {
     const claimant = await manager.findOneByOrFail(Claimant, { id: claim.claimantId });
-    return explainerTemplate({ text: claim.text, claimantName: claimant.name });
+    return explainerTemplate({
+      text: claim.text,
+      claimantName: claimantForReaders(claimant).displayName,
+    });
   }
 
   private async checkRating(manager: EntityManager, ratingId: string | null | undefined) {
