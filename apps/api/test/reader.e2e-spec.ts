@@ -28,28 +28,35 @@ describe('the reader side over HTTP: pages, feed, oEmbed, captures and subscript
   let slug: string;
   let captureId: string;
 
-  beforeAll(async () => {
-    t = await createTestApp('reader', {
-      PUBLISHER_ENABLED: 'false',
-      OUTBOX_WORKER_ENABLED: 'false',
-    });
-    desk = await DeskFlow.start(t, 'reader.test');
-    const claim = await desk.clearedClaim('The core warms the planet, a caller said');
+  /** A claim published with an archived capture of its first appearance. */
+  async function publishedWithCapture(
+    summary: string,
+    claimant?: Parameters<DeskFlow['clearedClaim']>[1],
+  ) {
+    const claim = await desk.clearedClaim(summary, claimant);
     const upload = await t
       .http()
       .post(`/api/claims/${claim.id}/attachments`)
       .set(desk.as('editor'))
       .attach('file', onePixelPng, 'phone-in-page.png')
       .expect(201);
-    captureId = upload.body.id;
     const appearance = (await desk.detail(claim.id)).appearances[0]!;
     await t
       .http()
       .patch(`/api/claims/${claim.id}/appearances/${appearance.id}`)
       .set(desk.as('editor'))
-      .send({ captureAttachmentId: captureId, version: appearance.version })
+      .send({ captureAttachmentId: upload.body.id, version: appearance.version })
       .expect(200);
-    slug = await desk.publishNow(claim.id);
+    return { claim, captureId: upload.body.id as string, slug: await desk.publishNow(claim.id) };
+  }
+
+  beforeAll(async () => {
+    t = await createTestApp('reader', {
+      PUBLISHER_ENABLED: 'false',
+      OUTBOX_WORKER_ENABLED: 'false',
+    });
+    desk = await DeskFlow.start(t, 'reader.test');
+    ({ slug, captureId } = await publishedWithCapture('The core warms the planet, a caller said'));
   });
   afterAll(() => t.close());
 
@@ -180,6 +187,37 @@ describe('the reader side over HTTP: pages, feed, oEmbed, captures and subscript
         .status,
     ).toBe(404);
     expect((await t.http().get(`/explainers/${slug}/captures/..%2F..%2Fetc`)).status).toBe(404);
+  });
+
+  it('withholds where a private individual was seen, and the capture, unless a desk chief names them', async () => {
+    const hidden = await publishedWithCapture('A neighbour blamed the core for the mild winter', {
+      name: 'Ottilie Brackwater',
+      kind: 'private_individual',
+    });
+    const page = await t.http().get(`/explainers/${hidden.slug}`).expect(200);
+    expect(page.text).toContain('Radio Marrowby phone-in');
+    expect(page.text).toContain('We do not give its address or a copy');
+    // Neither the name, nor the address where they were seen, nor the capture of it.
+    expect(page.text).not.toContain('Brackwater');
+    expect(page.text).not.toContain('radio.marrowby.test');
+    expect(page.text).not.toContain('/captures/');
+    const capture = `/explainers/${hidden.slug}/captures/${hidden.captureId}`;
+    expect((await t.http().get(capture)).status).toBe(404);
+
+    const { claimant } = await desk.detail(hidden.claim.id);
+    await t
+      .http()
+      .patch(`/api/claimants/${claimant.id}`)
+      .set(desk.as('chief'))
+      .send({ nameShownPublicly: true, version: claimant.version })
+      .expect(200);
+    await t.http().get(capture).expect(200);
+    const named = (await t.app.get(ReaderService).explainer(hidden.slug))!;
+    expect(named.claimant.displayName).toBe('Ottilie Brackwater');
+    expect(named.appearances[0]).toMatchObject({
+      url: 'https://radio.marrowby.test/phone-in/2026-11-20',
+      captureUrl: expect.stringContaining(`/captures/${hidden.captureId}`),
+    });
   });
 
   it('answers unknown explainers with a 404 page, and leaves the API its JSON', async () => {

@@ -39,6 +39,7 @@ const sun = {
 const co2 = {
   summary: 'CO2 is too small a share of the air to change the climate',
   privateName: 'Gareth Pennock',
+  letterUrl: 'https://www.marrowby-gazette.test/letters/2026-11-20',
 };
 // Cleared and scheduled three days after the seed ran: under embargo for this whole run.
 const oceans = {
@@ -150,13 +151,18 @@ async function expectClaimReviewMatchesPage(page: Page, review: ClaimReview): Pr
   );
   const first = page.locator('section.claim li').filter({ hasText: 'the first known appearance' });
   expect(await first.count()).toBe(1);
-  // The archived capture where there is one, else the address as the page prints it.
+  // The archived capture where there is one, else the address as the page prints it; neither
+  // where they could identify a private individual.
   const capture = first.getByRole('link', { name: /Archived copy/ });
+  const address = first.locator('.url');
+  const url = (await capture.count())
+    ? await capture.getAttribute('href')
+    : (await address.count())
+      ? await address.textContent()
+      : null;
   expect(review.itemReviewed.firstAppearance).toEqual({
     '@type': 'CreativeWork',
-    url: (await capture.count())
-      ? await capture.getAttribute('href')
-      : await first.locator('.url').textContent(),
+    ...(url === null ? {} : { url }),
     datePublished: await first.locator('time').getAttribute('datetime'),
   });
   expect(review.itemReviewed.appearance.length).toBe(
@@ -409,6 +415,12 @@ describe('reader pages, read with JavaScript turned off', () => {
     expect(await page.locator('section.claim figcaption').textContent()).toBe(
       'Said by A private individual',
     );
+    // Nor where his letter is, nor a copy of it: either would name him.
+    expect(await page.locator('section.claim').textContent()).toContain(
+      'We do not give its address or a copy: they could identify a private individual.',
+    );
+    expect(await page.content()).not.toContain(co2.letterUrl);
+    expect(await page.getByRole('link', { name: /Archived copy/ }).count()).toBe(0);
     const review = await claimReviewOf(page);
     await expectClaimReviewMatchesPage(page, review);
     expect(review.itemReviewed.author.name).toBe('A private individual');

@@ -116,9 +116,15 @@ export interface ReaderAppearance {
   seenAt: string;
   seenTimeZone: string;
   isFirstKnown: boolean;
-  /** Where it was seen (shown as text, and linked only through the archived capture). */
-  url: string;
-  /** The archived capture on our own site, linked with rel="nofollow"; null without one. */
+  /**
+   * Where it was seen (shown as text, and linked only through the archived capture); null
+   * when the claimant is a private individual readers may not name, whom it could name.
+   */
+  url: string | null;
+  /**
+   * The archived capture on our own site, linked with rel="nofollow"; null without one, and
+   * withheld (null) as the address is.
+   */
   captureUrl: string | null;
 }
 

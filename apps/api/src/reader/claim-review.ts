@@ -11,11 +11,14 @@ export function claimReviewJsonLd(
   explainer: ReaderExplainer,
 ): Record<string, unknown> {
   const organisation = { '@type': 'Organization', name: site.organisation, url: site.origin };
-  const appearances = explainer.appearances.map((appearance) => ({
-    '@type': 'CreativeWork',
-    url: appearance.captureUrl ?? appearance.url,
-    datePublished: appearance.seenAt,
-  }));
+  const appearances = explainer.appearances.map((appearance) => {
+    const url = appearance.captureUrl ?? appearance.url;
+    return {
+      '@type': 'CreativeWork',
+      ...(url ? { url } : {}),
+      datePublished: appearance.seenAt,
+    };
+  });
   const first = explainer.appearances.find((a) => a.isFirstKnown) ?? explainer.appearances[0];
   const rating = explainer.rating;
   return {

@@ -4,6 +4,7 @@ import {
   reliabilityGradeLabels,
   sourceKindLabels,
   updateNoteKindLabels,
+  type ReaderAppearance,
   type ReaderCorrection,
   type ReaderExplainer,
   type ReaderExplainerSummary,
@@ -88,11 +89,12 @@ export class ReaderService {
     const version = shown.verdictVersion;
     const upToShown = visible.filter((p) => p.sequence <= shown.sequence);
     const notes = this.notesOf(slug, upToShown).reverse();
+    const claimant = claimantForReaders(claim.claimant);
     const [ratings, sources, workings, appearances] = await Promise.all([
       this.ratings(),
       this.sources(claim.id, citedSourceIds(version.body)),
       this.workings(claim.id, embeddedWorkingIds(version.body)),
-      this.appearances(claim.id, slug),
+      this.appearances(claim.id, slug, { withheld: claimant.name === null }),
     ]);
     return {
       slug,
@@ -108,7 +110,7 @@ export class ReaderService {
         summary: claim.summary,
         topics: claim.topics.map((topic) => topic.topic).sort(),
       },
-      claimant: claimantForReaders(claim.claimant),
+      claimant,
       appearances,
       rating: ratings.find((rating) => rating.id === version.ratingId) ?? null,
       bottomLine: version.bottomLine,
@@ -258,8 +260,13 @@ export class ReaderService {
    * anything else (unpublished claims' files stay on the desk).
    */
   async publishedCapture(slug: string, attachmentId: string): Promise<Attachment | null> {
-    const claim = await this.dataSource.manager.findOne(Claim, { where: { slug } });
+    const claim = await this.dataSource.manager.findOne(Claim, {
+      where: { slug },
+      relations: { claimant: true },
+    });
     if (!claim || claim.status === 'set_aside') return null;
+    // A capture of a private individual's post shows who they are: withheld with the name.
+    if (claimantForReaders(claim.claimant).name === null) return null;
     const published = await this.dataSource
       .getRepository(Publication)
       .createQueryBuilder('p')
@@ -341,7 +348,16 @@ export class ReaderService {
       .map((w) => toReaderWorking(w, names));
   }
 
-  private async appearances(claimId: string, slug: string) {
+  /**
+   * Where the claim was seen. `withheld`: the claimant is a private individual readers may
+   * not name, and an address or a capture (their profile, their post) could name them, so
+   * only the outlet and the time are given.
+   */
+  private async appearances(
+    claimId: string,
+    slug: string,
+    { withheld }: { withheld: boolean },
+  ): Promise<ReaderAppearance[]> {
     const appearances = await this.dataSource.manager.find(Appearance, {
       where: { claimId },
       order: { seenAt: 'ASC', id: 'ASC' },
@@ -351,10 +367,11 @@ export class ReaderService {
       seenAt: appearance.seenAt.toISOString(),
       seenTimeZone: appearance.seenTimeZone,
       isFirstKnown: appearance.isFirstKnown,
-      url: appearance.url,
-      captureUrl: appearance.captureAttachmentId
-        ? `${explainerUrl(this.app.appUrl, slug)}/captures/${appearance.captureAttachmentId}`
-        : null,
+      url: withheld ? null : appearance.url,
+      captureUrl:
+        appearance.captureAttachmentId && !withheld
+          ? `${explainerUrl(this.app.appUrl, slug)}/captures/${appearance.captureAttachmentId}`
+          : null,
     }));
   }
 }

@@ -376,6 +376,12 @@ describe('renderExplainerPage for a private individual', () => {
         kind: 'private_individual',
         affiliation: 'Marrowby allotment society',
       },
+      // As ReaderService gives them: an address or a capture could identify them too.
+      appearances: explainer.appearances.map((appearance) => ({
+        ...appearance,
+        url: null,
+        captureUrl: null,
+      })),
     },
   });
 
@@ -383,6 +389,18 @@ describe('renderExplainerPage for a private individual', () => {
     const claim = only(byClass(page.document, 'claim'));
     expect(textOf(only(byTag(claim, 'figcaption')))).toBe('Said by A private individual');
     expect(textOf(page.document)).not.toContain('allotment');
+  });
+
+  it('says where and when they were seen, but gives no address and no copy', () => {
+    const claim = only(byClass(page.document, 'claim'));
+    expect(textOf(claim)).toContain('The Fennick Letter (newsletter)');
+    expect(textOf(claim)).toContain(
+      'We do not give its address or a copy: they could identify a private individual.',
+    );
+    expect(textOf(claim)).not.toContain('Address:');
+    expect(byTag(claim, 'a').filter((link) => attr(link, 'href')?.includes('/captures/'))).toEqual(
+      [],
+    );
   });
 });
 

@@ -88,12 +88,21 @@ function UpdateNotes({ notes, timeZone }: { notes: ReaderUpdateNote[]; timeZone:
 }
 
 function Appearance({ appearance }: { appearance: ReaderAppearance }) {
-  return (
-    <li>
+  const seen = (
+    <>
       <strong>{appearance.outlet}</strong>,{' '}
       <Moment at={appearance.seenAt} timeZone={appearance.seenTimeZone} zoneId />
-      {appearance.isFirstKnown ? ' (the first known appearance)' : ''}. Address:{' '}
-      <span className="url">{appearance.url}</span>.{' '}
+      {appearance.isFirstKnown ? ' (the first known appearance)' : ''}.{' '}
+    </>
+  );
+  if (appearance.url === null) {
+    return (
+      <li>{seen}We do not give its address or a copy: they could identify a private individual.</li>
+    );
+  }
+  return (
+    <li>
+      {seen}Address: <span className="url">{appearance.url}</span>.{' '}
       {isLinkable(appearance.captureUrl) ? (
         <a href={appearance.captureUrl} rel="nofollow">
           Archived copy<span className="sr"> of the appearance in {appearance.outlet}</span>

@@ -68,7 +68,8 @@ function MethodologyPage({ site, ratings }: MethodologyPageInput) {
         </li>
         <li>
           We do not name private individuals unless there is a strong public reason and the head of
-          the desk agrees.
+          the desk agrees. Until then we give neither the address of what they wrote nor a copy of
+          it, as either could name them.
         </li>
       </ul>
 
