@@ -393,6 +393,56 @@ describe('verdicts, the claim life and sign-off', () => {
       expect(edit.body.fields).toEqual({ state: 'submitted' });
     });
 
+    it('keeps on the claim a working and a source a verdict uses: out of a draft first, for good once submitted', async () => {
+      const { claim, sourceId, workingId } = await researchedClaim('What a verdict uses stays');
+      const removeWorking = () =>
+        t.http().delete(`/api/claims/${claim.id}/workings/${workingId}`).set(as('editor'));
+      const unlinkSource = () =>
+        t.http().delete(`/api/claims/${claim.id}/sources/${sourceId}`).set(as('editor'));
+      const expectRefused = async (
+        response: { status: number; body: { message: string; fields?: object } },
+        field: 'working' | 'source',
+        message: RegExp,
+      ) => {
+        expect(response.status).toBe(409);
+        expect(response.body.fields).toEqual({ [field]: 'inUse' });
+        expect(response.body.message).toMatch(message);
+      };
+      await completeDraft(claim.id, sourceId, workingId);
+      await expectRefused(
+        await removeWorking(),
+        'working',
+        /^The draft of version 1 .* uses this working/,
+      );
+      await expectRefused(
+        await unlinkSource(),
+        'source',
+        /^The draft of version 1 .* uses this source/,
+      );
+
+      expect((await move(claim.id, 'editor', 'awaiting_signoff')).status).toBe(200);
+      const kept =
+        /^Version 1 of the verdict uses this \w+, and a version sent for sign-off is kept/;
+      await expectRefused(await removeWorking(), 'working', kept);
+      await expectRefused(await unlinkSource(), 'source', kept);
+      const workings = await t.http().get(`/api/claims/${claim.id}/workings`).set(as('copy'));
+      expect(workings.body.map((working: { id: string }) => working.id)).toEqual([workingId]);
+      expect((await detail(claim.id)).sources.map((link) => link.id)).toEqual([sourceId]);
+
+      // A working no version uses can still go.
+      const spare = await t
+        .http()
+        .post(`/api/claims/${claim.id}/workings`)
+        .set(as('editor'))
+        .send({ calculatorId: 'energy-balance', inputs: {} })
+        .expect(201);
+      await t
+        .http()
+        .delete(`/api/claims/${claim.id}/workings/${spare.body.id}`)
+        .set(as('editor'))
+        .expect(204);
+    });
+
     it('refuses to submit a verdict that is not written yet', async () => {
       const { claim } = await researchedClaim('An empty verdict cannot be submitted');
       expect((await move(claim.id, 'editor', 'awaiting_signoff')).body.fields).toEqual({

@@ -21,6 +21,8 @@ export interface ClaimPartKind<Part extends ClaimPart, View> {
   assertMayRemove?(actor: AuthenticatedUser, part: Part): void;
   /** Last checks and knock-on changes, in the transaction, before the part is saved. */
   beforeSave?(manager: EntityManager, claim: Claim, part: Part): Promise<void>;
+  /** Last checks, in the transaction, before the part is removed; may throw to refuse. */
+  beforeRemove?(manager: EntityManager, claim: Claim, part: Part): Promise<void>;
   /** What the audit event records of a new part. */
   summarise(part: Part): Record<string, unknown>;
 }

@@ -83,9 +83,10 @@ export class ClaimPartsService {
     partId: string,
   ): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
-      await this.claims.lock(manager, claimId);
+      const claim = await this.claims.lock(manager, claimId);
       const part = await this.findPart(kind, manager, claimId, partId);
       (kind.assertMayRemove ?? kind.assertMayChange ?? defaultAssert(kind.name))(actor, part);
+      await kind.beforeRemove?.(manager, claim, part);
       const summary = kind.summarise(part);
       await manager.remove(part);
       await this.audit.record(manager, {

@@ -11,6 +11,7 @@ import { ApiError } from '../common/errors/api-error';
 import { whereWordStarts } from '../common/queries/word-prefix';
 import { assertExactlyOne } from '../common/validation/exactly-one';
 import { SearchIndexService } from '../search/search-index.service';
+import { assertNotInVerdict } from '../verdicts/verdict-references';
 import { type CreateSourceDto } from './dto/create-source.dto';
 import { type LinkSourceDto } from './dto/link-source.dto';
 import { type UpdateSourceDto } from './dto/update-source.dto';
@@ -103,6 +104,7 @@ export class SourcesService {
       if (!link)
         throw new ApiError(HttpStatus.NOT_FOUND, 'This source is not cited for this claim');
       assertMayChangePart(actor, { createdById: link.linkedById }, 'citation');
+      await assertNotInVerdict(manager, claimId, { kind: 'source', id: sourceId });
       await manager.delete(ClaimSource, { claimId, sourceId });
       await this.audit.record(manager, {
         actorId: actor.id,

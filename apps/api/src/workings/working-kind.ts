@@ -1,6 +1,7 @@
 import { type WorkingView } from '@skyledger/contracts';
 import { type ClaimPartKind } from '../claims/claim-part-kind';
 import { claimRoles } from '../claims/claim-policy';
+import { assertNotInVerdict } from '../verdicts/verdict-references';
 import { applyCalculation } from './apply-calculation';
 import { Working } from './entities/working.entity';
 import { runCalculation } from './run-calculation';
@@ -21,4 +22,6 @@ export const workingKind: ClaimPartKind<Working, WorkingView> = {
     if (working.id) return;
     applyCalculation(working, await runCalculation(manager, working.calculatorId, working.inputs));
   },
+  beforeRemove: (manager, claim, working) =>
+    assertNotInVerdict(manager, claim.id, { kind: 'working', id: working.id }),
 };
