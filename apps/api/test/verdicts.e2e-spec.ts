@@ -6,9 +6,11 @@ import {
   type Role,
   type SignoffView,
   type VerdictVersionView,
+  type WorkingRerunResponse,
 } from '@skyledger/contracts';
 import { AuditEvent } from '../src/audit/entities/audit-event.entity';
 import { Claim } from '../src/claims/entities/claim.entity';
+import { Working } from '../src/workings/entities/working.entity';
 import { createTestApp, testPassword, type TestApp } from './support/test-app';
 
 type Person = 'reporter' | 'editor' | 'editor2' | 'copy' | 'chief' | 'chief2';
@@ -441,6 +443,38 @@ describe('verdicts, the claim life and sign-off', () => {
         .delete(`/api/claims/${claim.id}/workings/${spare.body.id}`)
         .set(as('editor'))
         .expect(204);
+    });
+
+    it('re-runs a working a submitted version uses without changing it, and says so', async () => {
+      const { claim, sourceId, workingId } = await researchedClaim('A kept working is re-run');
+      await completeDraft(claim.id, sourceId, workingId);
+      expect((await move(claim.id, 'editor', 'awaiting_signoff')).status).toBe(200);
+      // As if an older library had given another value.
+      const workings = t.dataSource.getRepository(Working);
+      const stored = await workings.findOneByOrFail({ id: workingId });
+      const outputs = {
+        ...stored.outputs,
+        ratioToReference: { kind: 'number', value: 0.5, unit: '1' },
+      };
+      await workings.update(workingId, { libraryVersion: '0.0.1', outputs });
+      const before = await workings.findOneByOrFail({ id: workingId });
+
+      const response = await t
+        .http()
+        .post(`/api/claims/${claim.id}/workings/${workingId}/rerun`)
+        .set(as('editor'))
+        .send({ version: before.version });
+      expect(response.status).toBe(200);
+      const rerun = response.body as WorkingRerunResponse;
+      expect(rerun).toMatchObject({ keptBy: 1, changed: true, previousLibraryVersion: '0.0.1' });
+      expect(rerun.libraryVersion).not.toBe('0.0.1');
+      expect(rerun.differences.map((difference) => difference.output)).toEqual([
+        'ratioToReference',
+      ]);
+      // Stored as it was: what version 1 shows has not moved.
+      const after = await workings.findOneByOrFail({ id: workingId });
+      expect(after).toMatchObject({ version: before.version, libraryVersion: '0.0.1', outputs });
+      expect(rerun.working.outputs).toEqual(outputs);
     });
 
     it('refuses to submit a verdict that is not written yet', async () => {

@@ -130,6 +130,8 @@ describe('the workings of a claim', { timeout: 20_000 }, () => {
     const rerun: WorkingRerunResponse = {
       working: { ...layerWorking, libraryVersion: '0.2.0', version: 4 },
       previousLibraryVersion: '0.1.0',
+      libraryVersion: '0.2.0',
+      keptBy: null,
       changed: true,
       differences: [
         {
@@ -157,6 +159,39 @@ describe('the workings of a claim', { timeout: 20_000 }, () => {
     expect(fake.calls(`POST ${layerPath}/rerun`)[0]?.body).toEqual({ version: 3 });
     // The list is read again, so the card shows the stored re-run.
     expect(fake.calls(`GET ${claimWorkingsPath}`).length).toBeGreaterThanOrEqual(2);
+    expect(within(card).queryByText(/^Not stored/)).not.toBeInTheDocument();
+  });
+
+  it('says a re-run was not stored when a version sent for sign-off uses the working', async () => {
+    mockApi({
+      ...workingRoutes(),
+      [`POST ${layerPath}/rerun`]: {
+        status: 200,
+        body: {
+          working: layerWorking,
+          previousLibraryVersion: '0.1.0',
+          libraryVersion: '0.2.0',
+          keptBy: 2,
+          changed: true,
+          differences: [
+            {
+              output: 'surfaceTemperature',
+              before: layerWorking.outputs.surfaceTemperature!,
+              after: { kind: 'number', value: 288.1, unit: 'K' },
+            },
+          ],
+        } satisfies WorkingRerunResponse,
+      },
+    });
+    const { user } = renderWorkings('science_editor');
+    const card = await layerCard();
+    await user.click(within(card).getByRole('button', { name: 'Re-run with the current library' }));
+    expect(
+      await within(card).findByText(/Re-run with library 0.1.0 → 0.2.0: 1 output changed/),
+    ).toBeInTheDocument();
+    expect(within(card).getByRole('status')).toHaveTextContent(
+      'Not stored: version 2 of the verdict uses this working as it was, and a version sent for sign-off does not change. To bring the new result to readers, correct the verdict with a new working.',
+    );
   });
 
   it('says "unchanged" when a re-run gives the same outputs', async () => {
@@ -167,6 +202,8 @@ describe('the workings of a claim', { timeout: 20_000 }, () => {
         body: {
           working: { ...layerWorking, version: 4 },
           previousLibraryVersion: '0.1.0',
+          libraryVersion: '0.1.0',
+          keptBy: null,
           changed: false,
           differences: [],
         } satisfies WorkingRerunResponse,

@@ -73,8 +73,16 @@ export interface WorkingView {
 
 /** What running a working again with the library now in use changed. */
 export interface WorkingRerunResponse {
+  /** The working as stored after the re-run (as it was, when `keptBy` is set). */
   working: WorkingView;
   previousLibraryVersion: string;
+  /** The library the re-run used. */
+  libraryVersion: string;
+  /**
+   * The number of the verdict version, sent for sign-off, that uses this working: it is
+   * kept as it was, so the new result is shown and not stored. Null when it was stored.
+   */
+  keptBy: number | null;
   changed: boolean;
   /** The outputs whose value, unit or band differ, before and after. */
   differences: Array<{ output: string; before: WorkingOutput | null; after: WorkingOutput | null }>;

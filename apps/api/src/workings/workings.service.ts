@@ -11,6 +11,7 @@ import { type AuthenticatedUser } from '../auth/authenticated-user';
 import { claimRoles } from '../claims/claim-policy';
 import { ClaimsService } from '../claims/claims.service';
 import { ApiError } from '../common/errors/api-error';
+import { versionUsing } from '../verdicts/verdict-references';
 import { applyCalculation } from './apply-calculation';
 import { Working } from './entities/working.entity';
 import { runCalculation } from './run-calculation';
@@ -47,7 +48,9 @@ export class WorkingsService {
 
   /**
    * Recomputes a working from its stored inputs (series as they were read when it was
-   * saved) and keeps the new result, saying which outputs changed.
+   * saved) and keeps the new result, saying which outputs changed. A working a verdict
+   * version sent for sign-off uses is kept as it was (readers may have its numbers): the
+   * new result is only shown, and a correction brings it in as a new working.
    */
   async rerun(
     actor: AuthenticatedUser,
@@ -63,12 +66,26 @@ export class WorkingsService {
       });
       if (!working) throw new ApiError(HttpStatus.NOT_FOUND, 'No such working on this claim');
       if (working.version !== version) throw ApiError.stale('This working', working.version);
-      const before = working.outputs as Outputs;
       const previousLibraryVersion = working.libraryVersion;
-      const datasetRefs = working.datasetRefs;
       const calculation = await runCalculation(null, working.calculatorId, working.inputs);
-      applyCalculation(working, { ...calculation, datasetRefs });
-      const differences = outputDifferences(before, working.outputs as Outputs);
+      const differences = outputDifferences(
+        working.outputs as Outputs,
+        calculation.result.outputs as Outputs,
+      );
+      const keptBy = await versionUsing(
+        manager,
+        claimId,
+        { kind: 'working', id: workingId },
+        { sent: true },
+      );
+      const rerun = {
+        previousLibraryVersion,
+        libraryVersion: calculation.result.libraryVersion,
+        keptBy: keptBy?.number ?? null,
+        differences,
+      };
+      if (keptBy) return rerun;
+      applyCalculation(working, { ...calculation, datasetRefs: working.datasetRefs });
       await manager.save(working);
       await this.audit.record(manager, {
         actorId: actor.id,
@@ -82,17 +99,16 @@ export class WorkingsService {
           changedOutputs: differences.map((difference) => difference.output),
         },
       });
-      return { previousLibraryVersion, differences };
+      return rerun;
     });
     const working = await this.dataSource.manager.findOneOrFail(Working, {
       where: { id: workingId },
       relations: { createdBy: true },
     });
     return {
+      ...outcome,
       working: toWorkingView(working),
-      previousLibraryVersion: outcome.previousLibraryVersion,
       changed: outcome.differences.length > 0,
-      differences: outcome.differences,
     };
   }
 }

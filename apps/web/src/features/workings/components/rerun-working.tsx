@@ -18,15 +18,26 @@ function RerunOutcome({
   const label = (name: string) =>
     calculator?.outputs.find((output) => output.name === name)?.label ?? name;
   const versions =
-    outcome.previousLibraryVersion === outcome.working.libraryVersion
-      ? `library ${outcome.working.libraryVersion}`
-      : `library ${outcome.previousLibraryVersion} → ${outcome.working.libraryVersion}`;
+    outcome.previousLibraryVersion === outcome.libraryVersion
+      ? `library ${outcome.libraryVersion}`
+      : `library ${outcome.previousLibraryVersion} → ${outcome.libraryVersion}`;
+  const kept =
+    outcome.keptBy === null ? null : (
+      <Callout.Text size="2">
+        Not stored: version {outcome.keptBy} of the verdict uses this working as it was, and a
+        version sent for sign-off does not change. To bring the new result to readers, correct the
+        verdict with a new working.
+      </Callout.Text>
+    );
   if (!outcome.changed) {
     return (
       <Callout.Root color="jade" size="1" highContrast>
-        <Callout.Text>
-          Re-run with {versions}: unchanged. Every output is the same as before.
-        </Callout.Text>
+        <Flex direction="column" gap="2">
+          <Callout.Text>
+            Re-run with {versions}: unchanged. Every output is the same as before.
+          </Callout.Text>
+          {kept}
+        </Flex>
       </Callout.Root>
     );
   }
@@ -47,6 +58,7 @@ function RerunOutcome({
             </li>
           ))}
         </ul>
+        {kept}
       </Flex>
     </Callout.Root>
   );
