@@ -21,6 +21,15 @@ function RerunOutcome({
     outcome.previousLibraryVersion === outcome.libraryVersion
       ? `library ${outcome.libraryVersion}`
       : `library ${outcome.previousLibraryVersion} → ${outcome.libraryVersion}`;
+  if (!outcome.changed) {
+    return (
+      <Callout.Root color="jade" size="1" highContrast>
+        <Callout.Text>
+          Re-run with {versions}: unchanged. Every output is the same as before.
+        </Callout.Text>
+      </Callout.Root>
+    );
+  }
   const kept =
     outcome.keptBy === null ? null : (
       <Callout.Text size="2">
@@ -29,18 +38,6 @@ function RerunOutcome({
         verdict with a new working.
       </Callout.Text>
     );
-  if (!outcome.changed) {
-    return (
-      <Callout.Root color="jade" size="1" highContrast>
-        <Flex direction="column" gap="2">
-          <Callout.Text>
-            Re-run with {versions}: unchanged. Every output is the same as before.
-          </Callout.Text>
-          {kept}
-        </Flex>
-      </Callout.Root>
-    );
-  }
   return (
     <Callout.Root color="amber" size="1" highContrast>
       <Flex direction="column" gap="2">
