@@ -12,6 +12,7 @@ import { apiError, mockApi, type Routes } from './api-mock';
 import { coreClaimId } from './claim-fixtures';
 import { datasetList, stationDatasetId } from './dataset-fixtures';
 import { deskPeople } from './fixtures';
+import { draftVersion, verdictWith } from './verdict-fixtures';
 import {
   calculatorCatalogue,
   claimWorkingsPath,
@@ -21,10 +22,11 @@ import {
 
 const layerPath = `${claimWorkingsPath}/${layerWorking.id}`;
 
-function workingRoutes(workings = [layerWorking, trendWorking]): Routes {
+function workingRoutes(workings = [layerWorking, trendWorking], verdict = verdictWith()): Routes {
   return {
     'GET /api/calculators': { status: 200, body: calculatorCatalogue },
     [`GET ${claimWorkingsPath}`]: { status: 200, body: workings },
+    [`GET /api/claims/${coreClaimId}/verdict`]: { status: 200, body: verdict },
     'GET /api/datasets': { status: 200, body: datasetList },
     [`GET /api/claims/${coreClaimId}/history`]: { status: 200, body: [] },
   };
@@ -116,6 +118,31 @@ describe('the workings of a claim', { timeout: 20_000 }, () => {
     expect(series.closest('.rt-DataListItem')).toHaveTextContent(
       'column “Station anomaly” (anomaly_k) of SYNTHETIC Marrowby station annual anomalies, 5 points, 2014 to 2018',
     );
+  });
+
+  it('offers no removal of a working a verdict uses, and says which version', async () => {
+    mockApi(
+      workingRoutes(
+        [layerWorking, trendWorking],
+        verdictWith(
+          { ...draftVersion, number: 2, embeddedWorkingIds: [trendWorking.id] },
+          { ...draftVersion, number: 1, state: 'published', embeddedWorkingIds: [layerWorking.id] },
+        ),
+      ),
+    );
+    renderWorkings('science_editor');
+    const layer = await layerCard();
+    expect(
+      await within(layer).findByText('Kept: version 1 of the verdict uses it as it was.'),
+    ).toBeInTheDocument();
+    expect(within(layer).queryByRole('button', { name: 'Remove' })).not.toBeInTheDocument();
+    const trend = screen.getByRole('article', { name: 'Trend with an honest interval' });
+    expect(
+      within(trend).getByText(
+        'In the draft of version 2 of the verdict: take it out there to remove it.',
+      ),
+    ).toBeInTheDocument();
+    expect(within(trend).queryByRole('button', { name: 'Remove' })).not.toBeInTheDocument();
   });
 
   it('says when a claim has no workings yet', async () => {

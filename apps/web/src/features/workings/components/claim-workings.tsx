@@ -1,9 +1,11 @@
 import { Button, Callout, Flex, Heading, Spinner, Text } from '@radix-ui/themes';
+import { useQuery } from '@tanstack/react-query';
 import { Link as RouterLink } from 'react-router-dom';
 import { useShowNotice } from '@/components/ui/toaster';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/features/auth/current-user';
 import { hasClaimRole } from '@/features/claims/claim-permissions';
+import { claimVerdictQueryOptions } from '@/features/verdicts/api/get-claim-verdict';
 import { errorMessage } from '@/lib/api-error-messages';
 import { useCalculators } from '../api/get-calculators';
 import { useClaimWorkings } from '../api/get-claim-workings';
@@ -21,6 +23,12 @@ export function ClaimWorkings({ claimId }: { claimId: string }) {
   const showNotice = useShowNotice();
   const calculatorOf = (id: string) =>
     catalogue.data?.calculators.find((calculator) => calculator.id === id);
+  // Which verdict version uses a working, if any: the API refuses to remove it while one does.
+  const verdict = useQuery(claimVerdictQueryOptions(claimId));
+  const usedBy = (workingId: string) =>
+    verdict.data?.versions
+      .toReversed()
+      .find((version) => version.embeddedWorkingIds.includes(workingId));
 
   const mayRun = hasClaimRole(user.role, 'research');
 
@@ -66,6 +74,7 @@ export function ClaimWorkings({ claimId }: { claimId: string }) {
                 claimId={claimId}
                 working={working}
                 calculator={calculatorOf(working.calculatorId)}
+                usedBy={usedBy(working.id)}
                 user={user}
                 onNotice={showNotice}
               />

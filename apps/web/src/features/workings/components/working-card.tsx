@@ -1,6 +1,6 @@
 import { Card, Flex, Heading, Separator, Text } from '@radix-ui/themes';
 import type { CalculatorInfo } from '@skyledger/calc';
-import type { CurrentUser, WorkingView } from '@skyledger/contracts';
+import type { CurrentUser, VerdictVersionView, WorkingView } from '@skyledger/contracts';
 import type { ReactNode } from 'react';
 import { AppLink } from '@/components/ui/app-link';
 import { DateTime } from '@/components/ui/date-time';
@@ -30,12 +30,21 @@ interface WorkingCardProps {
   claimId: string;
   working: WorkingView;
   calculator: CalculatorInfo | undefined;
+  /** The earliest verdict version that uses this working, if one does. */
+  usedBy?: Pick<VerdictVersionView, 'number' | 'state'>;
   user: CurrentUser;
   onNotice: ShowNotice;
 }
 
 /** One saved working: who ran what, with which inputs, what came out, and how. */
-export function WorkingCard({ claimId, working, calculator, user, onNotice }: WorkingCardProps) {
+export function WorkingCard({
+  claimId,
+  working,
+  calculator,
+  usedBy,
+  user,
+  onNotice,
+}: WorkingCardProps) {
   const title = calculator?.title ?? working.calculatorId;
   const mayChange = mayChangePart(user, working.ranBy);
   const ranged = working.monteCarlo?.rangedInputs ?? [];
@@ -95,7 +104,13 @@ export function WorkingCard({ claimId, working, calculator, user, onNotice }: Wo
               <AppLink to={paths.app.workbench.getHref(working.calculatorId, claimId)} size="2">
                 Open in workbench
               </AppLink>
-              {mayChange ? (
+              {mayChange && usedBy ? (
+                <Text size="2" color="gray">
+                  {usedBy.state === 'draft'
+                    ? `In the draft of version ${usedBy.number} of the verdict: take it out there to remove it.`
+                    : `Kept: version ${usedBy.number} of the verdict uses it as it was.`}
+                </Text>
+              ) : mayChange ? (
                 <RemoveWorkingDialog
                   claimId={claimId}
                   working={working}
