@@ -27,9 +27,10 @@ export interface LoadResult extends Latency {
 }
 
 export interface LoadOptions {
-  connections: number;
+  /** Measured seconds per side, in `rounds` slices. */
   seconds: number;
-  /** A first run of this length whose figures are dropped (JIT, pools, caches). */
+  rounds: number;
+  /** A first run of this length per side whose figures are dropped (JIT, pools, caches). */
   warmupSeconds: number;
 }
 
@@ -40,13 +41,13 @@ export function percentile(sorted: readonly number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.max(0, rank))]!;
 }
 
-export function latencyOf(samples: number[]): Latency {
+function latencyOf(samples: number[]): Latency {
   const sorted = [...samples].sort((a, b) => a - b);
   return { p50: percentile(sorted, 50), p95: percentile(sorted, 95), p99: percentile(sorted, 99) };
 }
 
-/** What one autocannon run collected, before it is summed up. */
-interface Samples {
+/** What one run of a load collected, before it is summed up. */
+export interface Samples {
   latencies: number[];
   bytes: number;
   failures: number;
@@ -112,7 +113,7 @@ function fire(
 }
 
 /** The figures of one or more runs of the same requests, pooled. */
-function summarise(runs: readonly Samples[]): LoadResult {
+export function summarise(runs: readonly Samples[]): LoadResult {
   const latencies = runs.flatMap((run) => run.latencies);
   const seconds = runs.reduce((sum, run) => sum + run.seconds, 0);
   const bytes = runs.reduce((sum, run) => sum + run.bytes, 0);
@@ -126,40 +127,34 @@ function summarise(runs: readonly Samples[]): LoadResult {
   };
 }
 
-/**
- * Drives the API with autocannon from this process over loopback: a warm-up, then the
- * measured run. Latency is from sending a request to its last byte; over loopback and in
- * one write (as Express sends a page), that is the time to first byte plus microseconds.
- */
-export async function load(
-  baseUrl: string,
-  requests: readonly RequestSpec[],
-  options: LoadOptions,
-): Promise<LoadResult> {
-  await fire(baseUrl, requests, options.connections, options.warmupSeconds);
-  return summarise([await fire(baseUrl, requests, options.connections, options.seconds)]);
-}
+/** One side of a comparison: runs its load for so many seconds, at its connections. */
+export type Runner = (seconds: number) => Promise<Samples>;
 
 /**
- * Paths measured in turns (a path, its reference, a path, its reference …, in `rounds`
+ * Requests to the API, driven with autocannon from this process over loopback, as a side
+ * of `loadInTurns`. Latency is from sending a request to its last byte; over loopback and
+ * in one write (as Express sends a page), that is the time to first byte plus microseconds.
+ */
+export const httpRunner =
+  (baseUrl: string, requests: readonly RequestSpec[], connections: number): Runner =>
+  (seconds) =>
+    fire(baseUrl, requests, connections, seconds);
+
+/**
+ * Loads measured in turns (a path, its reference, a path, its reference …, in `rounds`
  * slices of the run's length each), each one's slices pooled. The machine's neighbours
  * take a share of its cores that comes and goes within a minute; measured one after the
  * other, either side could get the quiet stretch and the ratio would swing with it.
  */
-export async function loadInTurns<Sides extends ReadonlyArray<readonly RequestSpec[]>>(
-  baseUrl: string,
+export async function loadInTurns<Sides extends readonly Runner[]>(
   sides: readonly [...Sides],
-  options: LoadOptions & { rounds: number },
+  options: LoadOptions,
 ): Promise<{ [K in keyof Sides]: LoadResult }> {
-  for (const requests of sides) {
-    await fire(baseUrl, requests, options.connections, options.warmupSeconds);
-  }
+  for (const run of sides) await run(options.warmupSeconds);
   const runs = sides.map((): Samples[] => []);
   const slice = options.seconds / options.rounds;
   for (let round = 0; round < options.rounds; round += 1) {
-    for (const [side, requests] of sides.entries()) {
-      runs[side]!.push(await fire(baseUrl, requests, options.connections, slice));
-    }
+    for (const [side, run] of sides.entries()) runs[side]!.push(await run(slice));
   }
   return runs.map(summarise) as { [K in keyof Sides]: LoadResult };
 }

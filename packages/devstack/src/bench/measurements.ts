@@ -1,7 +1,7 @@
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { type BenchStack } from './bench-stack.js';
-import { load, loadInTurns, type LoadResult, type RequestSpec } from './load.js';
+import { httpRunner, loadInTurns, type LoadResult, type RequestSpec, type Runner } from './load.js';
 import { connections, type BenchPlan } from './plan.js';
 import { type BenchRow } from './report.js';
 import {
@@ -14,7 +14,7 @@ import {
 import { deskFirstRoute, gzipSize, stylesheetsOf } from './sizes.js';
 import {
   idsOf,
-  measureStatements,
+  statementsRunner,
   searchStatement,
   similarStatement,
   typoRecall,
@@ -62,25 +62,23 @@ export class Measurements {
     private readonly plan: BenchPlan,
   ) {}
 
-  private load(requests: readonly RequestSpec[], connections: number) {
-    return load(this.stack.baseUrl, requests, {
-      connections,
-      seconds: this.plan.seconds,
-      warmupSeconds: this.plan.warmupSeconds,
-    });
-  }
-
-  /** Requests measured in turns with their references (`loadInTurns`). */
-  private inTurns<Sides extends ReadonlyArray<readonly RequestSpec[]>>(
-    sides: readonly [...Sides],
-    connections: number,
-  ) {
-    return loadInTurns(this.stack.baseUrl, sides, {
-      connections,
+  /** Loads measured in turns with their references (`loadInTurns`). */
+  private runInTurns<Sides extends readonly Runner[]>(sides: readonly [...Sides]) {
+    return loadInTurns(sides, {
       seconds: this.plan.seconds,
       warmupSeconds: this.plan.warmupSeconds,
       rounds: this.plan.rounds,
     });
+  }
+
+  /** Requests to the API measured in turns with their references, all at `connections`. */
+  private inTurns<Sides extends ReadonlyArray<readonly RequestSpec[]>>(
+    sides: readonly [...Sides],
+    connections: number,
+  ) {
+    return this.runInTurns(
+      sides.map((requests) => httpRunner(this.stack.baseUrl, requests, connections)),
+    ) as Promise<{ [K in keyof Sides]: LoadResult }>;
   }
 
   private get(path: string): RequestSpec {
@@ -157,27 +155,28 @@ export class Measurements {
     queries: { speed: readonly string[]; typos: readonly TypoCase[]; depth: number },
     pageIds: (body: unknown) => string[],
   ): Promise<BenchRow[]> {
-    const api = await this.load(
-      queries.speed.map((query) => this.get(request(query))),
-      connections.latency,
-    );
-    const options = { ...this.plan, connections: connections.latency };
+    const [api, ...sql] = await this.runInTurns([
+      httpRunner(
+        this.stack.baseUrl,
+        queries.speed.map((query) => this.get(request(query))),
+        connections.latency,
+      ),
+      ...engines.map((engine) =>
+        statementsRunner(
+          this.stack.pool,
+          queries.speed.map((query) => statement(engine, query)),
+          connections.latency,
+        ),
+      ),
+    ]);
     const rows: BenchRow[] = [];
-    for (const engine of engines) {
-      const sql = await measureStatements(
-        this.stack.pool,
-        queries.speed.map((query) => statement(engine, query)),
-        options,
-      );
+    for (const [index, engine] of engines.entries()) {
       const limit = engine === 'like' ? 0.1 : 1;
       rows.push(
         latencyRow(
           path,
-          api,
-          {
-            name: engineNames[engine],
-            run: { ...sql, requests: sql.queries, failures: 0, failedStatuses: [], bytes: 0 },
-          },
+          api!,
+          { name: engineNames[engine], run: sql[index]! },
           {
             text: engine === 'like' ? 'p95 ≤ 0.1× LIKE' : 'p95 ≤ 1× FULLTEXT and ≤ 20 ms',
             pass: (ratio, p95) => ratio <= limit && (engine === 'like' || p95 <= 20),

@@ -1,5 +1,5 @@
 import { type Pool, type RowDataPacket } from 'mysql2/promise';
-import { latencyOf, type Latency, type LoadOptions } from './load.js';
+import { type Runner } from './load.js';
 import { type TypoCase } from './search-cases.js';
 
 /**
@@ -61,17 +61,17 @@ export function similarStatement(engine: SqlEngine, text: string): Statement {
   };
 }
 
-/** Runs the statements in turn on `connections` connections at once, timing each. */
-export async function measureStatements(
-  pool: Pool,
-  statements: readonly Statement[],
-  options: LoadOptions,
-): Promise<Latency & { queries: number; perSecond: number }> {
-  const run = async (seconds: number) => {
+/**
+ * The statements run in turn on `connections` connections at once, each timed, as a side
+ * of `loadInTurns`.
+ */
+export const statementsRunner =
+  (pool: Pool, statements: readonly Statement[], connections: number): Runner =>
+  async (seconds) => {
     const latencies: number[] = [];
     const deadline = performance.now() + seconds * 1000;
     await Promise.all(
-      Array.from({ length: options.connections }, async (_, worker) => {
+      Array.from({ length: connections }, async (_, worker) => {
         for (let n = worker; performance.now() < deadline; n += 1) {
           const statement = statements[n % statements.length]!;
           const started = performance.now();
@@ -80,16 +80,8 @@ export async function measureStatements(
         }
       }),
     );
-    return latencies;
+    return { latencies, bytes: 0, failures: 0, failedStatuses: new Set<number>(), seconds };
   };
-  await run(options.warmupSeconds);
-  const latencies = await run(options.seconds);
-  return {
-    ...latencyOf(latencies),
-    queries: latencies.length,
-    perSecond: latencies.length / options.seconds,
-  };
-}
 
 /** Whether any of these claims holds the word (in its summary or its text). */
 export async function holdsWord(pool: Pool, ids: string[], word: string): Promise<boolean> {
