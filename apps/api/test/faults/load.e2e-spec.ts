@@ -1,6 +1,6 @@
 import { benchPlans } from '@skyledger/devstack/bench/plan';
 import { Cleanups, startBenchStack, type BenchStack } from '@skyledger/devstack/bench/bench-stack';
-import { load, type RequestSpec } from '@skyledger/devstack/bench/load';
+import { httpRunner, loadInTurns, type RequestSpec } from '@skyledger/devstack/bench/load';
 import { deskQueries } from '@skyledger/devstack/bench/search-cases';
 import { databaseAccess } from '@skyledger/devstack/test-database';
 import { createConnection, type Connection, type RowDataPacket } from 'mysql2/promise';
@@ -122,10 +122,10 @@ describe('200 concurrent connections on the queue, search and reader pages', () 
 
       const refusedBefore = await refusedConnections(monitor);
       const connections = watchConnections(monitor, databaseName);
-      const result = await load(stack.baseUrl, requests, {
-        connections: CONNECTIONS,
+      const [result] = await loadInTurns([httpRunner(stack.baseUrl, requests, CONNECTIONS)], {
         seconds: SECONDS,
         warmupSeconds: 1,
+        rounds: 1,
       }).finally(() => connections.stop());
       const used = await connections.stop();
       const refused = (await refusedConnections(monitor)) - refusedBefore;
