@@ -61,6 +61,25 @@ function renderWorkings(role: Role) {
   return { user: userEvent.setup() };
 }
 
+/** A re-run from library 0.1.0 to 0.2.0 that changed the surface temperature. */
+function changedRerun(
+  rest: Pick<WorkingRerunResponse, 'working' | 'keptBy'>,
+): WorkingRerunResponse {
+  return {
+    ...rest,
+    previousLibraryVersion: '0.1.0',
+    libraryVersion: '0.2.0',
+    changed: true,
+    differences: [
+      {
+        output: 'surfaceTemperature',
+        before: layerWorking.outputs.surfaceTemperature!,
+        after: { kind: 'number', value: 288.1, unit: 'K' },
+      },
+    ],
+  };
+}
+
 async function layerCard() {
   return screen.findByRole('article', { name: 'Layer model of the greenhouse effect' });
 }
@@ -154,20 +173,10 @@ describe('the workings of a claim', { timeout: 20_000 }, () => {
   });
 
   it('re-runs a working with the current library and lists what changed', async () => {
-    const rerun: WorkingRerunResponse = {
+    const rerun = changedRerun({
       working: { ...layerWorking, libraryVersion: '0.2.0', version: 4 },
-      previousLibraryVersion: '0.1.0',
-      libraryVersion: '0.2.0',
       keptBy: null,
-      changed: true,
-      differences: [
-        {
-          output: 'surfaceTemperature',
-          before: layerWorking.outputs.surfaceTemperature!,
-          after: { kind: 'number', value: 288.1, unit: 'K' },
-        },
-      ],
-    };
+    });
     const fake = mockApi({
       ...workingRoutes(),
       [`POST ${layerPath}/rerun`]: { status: 200, body: rerun },
@@ -194,20 +203,7 @@ describe('the workings of a claim', { timeout: 20_000 }, () => {
       ...workingRoutes(),
       [`POST ${layerPath}/rerun`]: {
         status: 200,
-        body: {
-          working: layerWorking,
-          previousLibraryVersion: '0.1.0',
-          libraryVersion: '0.2.0',
-          keptBy: 2,
-          changed: true,
-          differences: [
-            {
-              output: 'surfaceTemperature',
-              before: layerWorking.outputs.surfaceTemperature!,
-              after: { kind: 'number', value: 288.1, unit: 'K' },
-            },
-          ],
-        } satisfies WorkingRerunResponse,
+        body: changedRerun({ working: layerWorking, keptBy: 2 }),
       },
     });
     const { user } = renderWorkings('science_editor');

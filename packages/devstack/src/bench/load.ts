@@ -113,7 +113,7 @@ function fire(
 }
 
 /** The figures of one or more runs of the same requests, pooled. */
-export function summarise(runs: readonly Samples[]): LoadResult {
+function summarise(runs: readonly Samples[]): LoadResult {
   const latencies = runs.flatMap((run) => run.latencies);
   const seconds = runs.reduce((sum, run) => sum + run.seconds, 0);
   const bytes = runs.reduce((sum, run) => sum + run.bytes, 0);
