@@ -194,6 +194,7 @@ describe('publishing: now or embargoed, corrections in the open, reader subscrip
     const subscriptions = t.app.get(ReaderSubscriptionsService);
     await subscriptions.subscribe(
       await t.dataSource.getRepository(Claim).findOneByOrFail({ id: claim.id }),
+      first.claim.summary,
       'Reader@Example.test',
     );
     await t.app.get(OutboxWorker).runPass();

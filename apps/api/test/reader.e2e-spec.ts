@@ -220,6 +220,64 @@ describe('the reader side over HTTP: pages, feed, oEmbed, captures and subscript
     });
   });
 
+  it('shows readers the claim as the copy desk cleared it, never edits made since', async () => {
+    const cleared = 'Hot springs prove the core is heating up';
+    const claim = await desk.clearedClaim(cleared);
+    const edit = async (fields: object) => {
+      const { version } = await desk.detail(claim.id);
+      await t
+        .http()
+        .patch(`/api/claims/${claim.id}`)
+        .set(desk.as('editor'))
+        .send({ version, ...fields })
+        .expect(200);
+    };
+    // Edited after the copy desk cleared it: published as cleared all the same.
+    await edit({ summary: 'Hot springs show the core heats up fast' });
+    const clearedSlug = await desk.publishNow(claim.id);
+    expect(clearedSlug).toBe('hot-springs-prove-the-core-is-heating-up');
+    const readerText = async (path: string) =>
+      textOf(parse((await t.http().get(path).expect(200)).text) as unknown as HtmlNode);
+    expect(await readerText(`/explainers/${clearedSlug}`)).toContain(cleared);
+    expect(await readerText(`/explainers/${clearedSlug}`)).not.toContain('heats up fast');
+
+    // Reopened for a correction and edited: readers see none of it until it is published.
+    await desk.move(claim.id, 'editor', 'in_research');
+    const [other] = await t.dataSource.query<Array<{ id: string }>>(
+      'SELECT claimant_id AS id FROM claims WHERE slug = ?',
+      [slug],
+    );
+    const corrected = 'Warm springs near Marrowby say nothing about the core';
+    await edit({
+      summary: corrected,
+      text: 'The warm springs near Marrowby show the core is heating up.',
+      claimantId: other!.id,
+    });
+    const page = await readerText(`/explainers/${clearedSlug}`);
+    expect(page).toContain(`${cleared}, said on the Marrowby phone-in.`);
+    expect(page).toContain(`Claimant of ${cleared}`);
+    expect(page).not.toContain(corrected);
+    expect(page).not.toContain('The core warms the planet, a caller said');
+    for (const path of ['/explainers', '/feeds/explainers.atom']) {
+      const listed = (await t.http().get(path).expect(200)).text;
+      expect(listed).toContain(cleared);
+      expect(listed).not.toContain(corrected);
+    }
+
+    await desk.clearVerdict(claim.id, {
+      bottomLine: 'Warm springs are fed by rain, not the core.',
+    });
+    await desk.publishNow(claim.id, {
+      note: { kind: 'correction', text: 'We had the claim’s place and wording wrong.' },
+    });
+    const correctedPage = await readerText(`/explainers/${clearedSlug}`);
+    expect(correctedPage).toContain(corrected);
+    expect(correctedPage).toContain('The warm springs near Marrowby show the core is heating up.');
+    expect(correctedPage).toContain('Claimant of The core warms the planet, a caller said');
+    expect(await readerText(`/explainers/${clearedSlug}/v/1`)).toContain(cleared);
+    expect(await readerText('/corrections')).toContain(corrected);
+  });
+
   it('answers unknown explainers with a 404 page, and leaves the API its JSON', async () => {
     const missing = await t.http().get('/explainers/no-such-thing').expect(404);
     expect(missing.headers['content-type']).toMatch(/^text\/html/);

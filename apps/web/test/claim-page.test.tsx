@@ -5,6 +5,7 @@ import { apiError, mockApi, type Routes } from './api-mock';
 import { coreClaim, deskPeopleList, filedClaim } from './claim-fixtures';
 import { deskPeople, sessionFor } from './fixtures';
 import { renderApp } from './render-app';
+import { draftVersion, verdictWith } from './verdict-fixtures';
 
 const claimPath = `/api/claims/${coreClaim.id}`;
 
@@ -13,6 +14,7 @@ function claimRoutes(role: Role, claim: ClaimDetail = coreClaim): Routes {
     'POST /api/auth/refresh': { status: 200, body: sessionFor(role) },
     'GET /api/people': { status: 200, body: deskPeopleList },
     [`GET /api/claims/${claim.id}`]: { status: 200, body: claim },
+    [`GET /api/claims/${claim.id}/verdict`]: { status: 200, body: verdictWith() },
   };
 }
 
@@ -155,6 +157,33 @@ describe('the claim page', { timeout: 20_000 }, () => {
     expect(summary).toHaveValue('Geothermal heat explains warming');
     expect(fake.calls(`GET ${claimPath}`)).toHaveLength(2);
   });
+
+  it.each([
+    [
+      'cleared',
+      'The copy desk cleared version 2 with the claim as it stood: readers will be shown what was said, its summary and who said it as cleared. A change to those reaches them only with a version cleared after it.',
+    ],
+    [
+      'published',
+      'Readers are shown what was said, its summary and who said it as published with version 2, until a corrected version is cleared and published.',
+    ],
+  ] as const)(
+    'says what readers see while a claim with a %s version is edited',
+    async (state, note) => {
+      mockApi({
+        ...claimRoutes('science_editor'),
+        [`GET /api/claims/${coreClaim.id}/verdict`]: {
+          status: 200,
+          body: verdictWith({ ...draftVersion, id: 'v2', number: 2, state }),
+        },
+      });
+      const { user } = renderApp(`/claims/${coreClaim.id}`);
+
+      await user.click(await screen.findByRole('button', { name: 'Edit the claim' }));
+      const form = screen.getByRole('form', { name: 'Edit the claim' });
+      expect(await within(form).findByText(note)).toBeInTheDocument();
+    },
+  );
 
   it('lets a science editor take a claim nobody has', async () => {
     const filedPath = `/api/claims/${filedClaim.id}`;

@@ -125,6 +125,14 @@ describe('the generated desk’s workings, verdicts and explainers', () => {
             expect(checklist.filter((item) => !item.done)).toEqual([]);
           }
         }
+        // What readers are shown with the version: the claim as it was cleared.
+        const asCleared = { text: claim.text, summary: claim.summary, id: claim.claimantId };
+        const none = { text: null, summary: null, id: null };
+        expect({
+          text: version.claimText,
+          summary: version.claimSummary,
+          id: version.claimantId,
+        }).toEqual(decisions.some((d) => d.decision === 'cleared') ? asCleared : none);
       }
       if (claim.status !== 'cleared' && claim.status !== 'published') continue;
       expect(claim.legalReview).toBe(false);

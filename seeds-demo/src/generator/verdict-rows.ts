@@ -30,6 +30,10 @@ export interface VerdictVersionRow {
   createdById: string;
   lastEditedById: string;
   submittedAt: Date | null;
+  /** The claim as the copy desk cleared it (cleared versions and later); else null. */
+  claimText: string | null;
+  claimSummary: string | null;
+  claimantId: string | null;
   createdAt: Date;
   updatedAt: Date;
   version: number;
@@ -105,6 +109,7 @@ function versionStates(random: SeededRandom, status: ClaimStatus): VerdictVersio
 
 const decided = new Set<VerdictVersionState>(['sent_back', 'cleared', 'published', 'superseded']);
 const publishedStates = new Set<VerdictVersionState>(['published', 'superseded']);
+const clearedStates = new Set<VerdictVersionState>(['cleared', ...publishedStates]);
 
 /** The sign-off checklist as the API words it, for a claim in the state these rows make. */
 function checklist(
@@ -248,6 +253,9 @@ export function* withVerdicts(
         createdById: researcherId,
         lastEditedById: researcherId,
         submittedAt: state === 'draft' ? null : at(0.5),
+        ...(clearedStates.has(state)
+          ? { claimText: claim.text, claimSummary: claim.summary, claimantId: claim.claimantId }
+          : { claimText: null, claimSummary: null, claimantId: null }),
         createdAt: at(0),
         updatedAt: at(0.3),
         version: 1 + verdicts.below(6),

@@ -253,6 +253,12 @@ export class ClaimLifeService {
       );
     }
     version.state = decision;
+    if (decision === 'cleared') {
+      // The claim as the copy desk saw it (the transition checked the claim's version).
+      version.claimText = claim.text;
+      version.claimSummary = claim.summary;
+      version.claimantId = claim.claimantId;
+    }
     await manager.save(version);
     await manager.insert(SignoffDecisionRecord, {
       claimId: claim.id,

@@ -18,6 +18,7 @@ import { type PublishClaimDto } from './dto/publish-claim.dto';
 import { Publication } from './entities/publication.entity';
 import { explainerUrl, toPublicationView } from './publication-view';
 import { ReaderSubscriptionsService } from './reader-subscriptions.service';
+import { claimAsCleared } from '../verdicts/claim-as-cleared';
 import { uniqueSlug } from './slug';
 
 /** A scheduled instant must be at least this far ahead, so it is not in the past on arrival. */
@@ -242,7 +243,8 @@ export class PublishingService {
     publication: Publication,
     actorId: string | null,
   ): Promise<number> {
-    claim.slug ??= await uniqueSlug(manager, claim);
+    const { summary } = claimAsCleared(claim, version);
+    claim.slug ??= await uniqueSlug(manager, claim.id, summary);
     publication.state = 'published';
     publication.publishedAt = new Date();
     claim.firstPublishedAt ??= publication.publishedAt;
@@ -281,7 +283,7 @@ export class PublishingService {
       ]),
     });
     let mails = await this.notifications.notify(manager, 'published', team, (recipient) =>
-      publishedMail({ displayName: recipient.displayName, summary: claim.summary, url }),
+      publishedMail({ displayName: recipient.displayName, summary, url }),
     );
     if (publication.scheduledFor) {
       const scheduler = await manager.findBy(User, { id: publication.createdById });
@@ -292,7 +294,7 @@ export class PublishingService {
         (recipient) =>
           scheduledPublishedMail({
             displayName: recipient.displayName,
-            summary: claim.summary,
+            summary,
             url,
             at: publication.scheduledFor!,
             timeZone: publication.scheduledTimeZone ?? 'UTC',
@@ -301,6 +303,7 @@ export class PublishingService {
     }
     if (publication.noteKind) {
       mails += await this.subscriptions.notifyUpdate(manager, claim, {
+        summary,
         kindLabel: updateNoteKindLabels[publication.noteKind],
         text: publication.noteText ?? '',
         url,

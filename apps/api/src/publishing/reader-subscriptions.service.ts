@@ -28,9 +28,10 @@ export class ReaderSubscriptionsService {
 
   /**
    * Queues a confirmation to the address. The answer is the same whether or not the address
-   * was subscribed already, so the form tells nobody who reads what.
+   * was subscribed already, so the form tells nobody who reads what. `summary` is the
+   * claim's as readers see it.
    */
-  async subscribe(claim: Claim, email: string): Promise<void> {
+  async subscribe(claim: Claim, summary: string, email: string): Promise<void> {
     const address = email.trim().toLowerCase();
     const token = randomToken();
     await this.dataSource.transaction(async (manager) => {
@@ -54,7 +55,7 @@ export class ReaderSubscriptionsService {
         kind: 'reader_confirm',
         to: address,
         ...readerConfirmMail({
-          summary: claim.summary,
+          summary,
           confirmUrl: `${base}/subscription/confirm?token=${encodeURIComponent(token)}`,
           siteName: this.app.newsroomName,
         }),
@@ -87,7 +88,7 @@ export class ReaderSubscriptionsService {
   async notifyUpdate(
     manager: EntityManager,
     claim: Claim,
-    note: { kindLabel: string; text: string; url: string },
+    note: { summary: string; kindLabel: string; text: string; url: string },
   ): Promise<number> {
     const subscribers = await manager.find(ReaderSubscription, {
       where: { claimId: claim.id, confirmedAt: Not(IsNull()) },
@@ -97,7 +98,6 @@ export class ReaderSubscriptionsService {
         kind: 'reader_update',
         to: subscriber.email,
         ...readerUpdateMail({
-          summary: claim.summary,
           ...note,
           unsubscribeUrl: `${note.url}/subscription/unsubscribe?token=${this.unsubscribeToken(subscriber.id)}`,
           siteName: this.app.newsroomName,

@@ -135,13 +135,14 @@ export class ReaderController {
   ): Promise<string> {
     const parsed = readerSubscriptionSchema.safeParse({ email: one(body?.email) ?? '' });
     const claim = await this.dataSource.manager.findOne(Claim, { where: { slug } });
-    if (!parsed.success || !claim) {
+    const [shown] = claim ? (await this.reader.list({ claimIds: [claim.id] })).items : [];
+    if (!parsed.success || !claim || !shown) {
       return this.explainerPage(res, slug, undefined, {
         status: 'invalid',
         message: 'Enter an e-mail address, such as name@example.org.',
       });
     }
-    await this.subscriptions.subscribe(claim, parsed.data.email);
+    await this.subscriptions.subscribe(claim, shown.summary, parsed.data.email);
     res.status(HttpStatus.ACCEPTED);
     return this.explainerPage(res, slug, undefined, {
       status: 'sent',

@@ -24,6 +24,7 @@ import { Dataset } from '../datasets/entities/dataset.entity';
 import { Publication } from '../publishing/entities/publication.entity';
 import { explainerUrl, publicationUrl } from '../publishing/publication-view';
 import { RatingLevel } from '../ratings/entities/rating-level.entity';
+import { claimantAsCleared, claimAsCleared } from '../verdicts/claim-as-cleared';
 import { ClaimSource } from '../sources/entities/claim-source.entity';
 import { Working } from '../workings/entities/working.entity';
 import { toReaderWorking } from './reader-working';
@@ -77,7 +78,7 @@ export class ReaderService {
     if (!claim) return null;
     const publications = await manager.find(Publication, {
       where: { claimId: claim.id, state: 'published' },
-      relations: { verdictVersion: true },
+      relations: { verdictVersion: { claimant: true } },
       order: { sequence: 'ASC' },
     });
     const visible = publications.filter(
@@ -89,7 +90,8 @@ export class ReaderService {
     const version = shown.verdictVersion;
     const upToShown = visible.filter((p) => p.sequence <= shown.sequence);
     const notes = this.notesOf(slug, upToShown).reverse();
-    const claimant = claimantForReaders(claim.claimant);
+    const cleared = claimAsCleared(claim, version);
+    const claimant = claimantForReaders(claimantAsCleared(claim, version));
     const [ratings, sources, workings, appearances] = await Promise.all([
       this.ratings(),
       this.sources(claim.id, citedSourceIds(version.body)),
@@ -106,8 +108,8 @@ export class ReaderService {
       sequence: shown.sequence,
       isLatest: shown === latest,
       claim: {
-        text: claim.text,
-        summary: claim.summary,
+        text: cleared.text,
+        summary: cleared.summary,
         topics: claim.topics.map((topic) => topic.topic).sort(),
       },
       claimant,
@@ -188,14 +190,20 @@ export class ReaderService {
       }),
       this.dataSource.manager.find(Publication, {
         where: { claimId: In(ids), state: 'published', publishedAt: LessThanOrEqual(new Date()) },
-        relations: { verdictVersion: true },
+        relations: { verdictVersion: { claimant: true } },
         select: {
           id: true,
           claimId: true,
           sequence: true,
           publishedAt: true,
           noteKind: true,
-          verdictVersion: { id: true, ratingId: true, bottomLine: true },
+          verdictVersion: {
+            id: true,
+            ratingId: true,
+            bottomLine: true,
+            claimSummary: true,
+            claimant: { id: true, name: true, kind: true, nameShownPublicly: true },
+          },
         },
         order: { sequence: 'ASC' },
       }),
@@ -211,8 +219,9 @@ export class ReaderService {
         {
           slug: claim.slug,
           url: explainerUrl(this.app.appUrl, claim.slug),
-          summary: claim.summary,
-          claimantDisplayName: claimantForReaders(claim.claimant).displayName,
+          summary: claimAsCleared(claim, latest.verdictVersion).summary,
+          claimantDisplayName: claimantForReaders(claimantAsCleared(claim, latest.verdictVersion))
+            .displayName,
           rating: ratings.find((rating) => rating.id === latest.verdictVersion.ratingId) ?? null,
           bottomLine: latest.verdictVersion.bottomLine,
           topics: claim.topics.map((topic) => topic.topic).sort(),
@@ -242,6 +251,8 @@ export class ReaderService {
       .getRepository(Publication)
       .createQueryBuilder('p')
       .innerJoinAndSelect('p.claim', 'claim')
+      .innerJoin('p.verdictVersion', 'version')
+      .addSelect(['version.id', 'version.claimSummary'])
       .where("p.state = 'published' AND p.published_at <= NOW(3) AND p.note_kind IS NOT NULL")
       .orderBy('claim.first_published_at', 'DESC')
       .addOrderBy('claim.id', 'ASC')
@@ -250,7 +261,7 @@ export class ReaderService {
     return publications.map((p) => ({
       slug: p.claim.slug!,
       url: explainerUrl(this.app.appUrl, p.claim.slug!),
-      summary: p.claim.summary,
+      summary: claimAsCleared(p.claim, p.verdictVersion).summary,
       note: this.noteOf(p.claim.slug!, p),
     }));
   }
@@ -265,20 +276,20 @@ export class ReaderService {
       relations: { claimant: true },
     });
     if (!claim || claim.status === 'set_aside') return null;
+    const latest = await this.dataSource.manager.findOne(Publication, {
+      where: { claimId: claim.id, state: 'published', publishedAt: LessThanOrEqual(new Date()) },
+      relations: { verdictVersion: { claimant: true } },
+      order: { sequence: 'DESC' },
+    });
+    if (!latest) return null;
     // A capture of a private individual's post shows who they are: withheld with the name.
-    if (claimantForReaders(claim.claimant).name === null) return null;
-    const published = await this.dataSource
-      .getRepository(Publication)
-      .createQueryBuilder('p')
-      .where("p.claim_id = :id AND p.state = 'published' AND p.published_at <= NOW(3)", {
-        id: claim.id,
-      })
-      .getExists();
+    const claimant = claimantAsCleared(claim, latest.verdictVersion);
+    if (claimantForReaders(claimant).name === null) return null;
     const appearance = await this.dataSource.manager.existsBy(Appearance, {
       claimId: claim.id,
       captureAttachmentId: attachmentId,
     });
-    if (!published || !appearance) return null;
+    if (!appearance) return null;
     return this.dataSource.manager.findOne(Attachment, { where: { id: attachmentId } });
   }
 

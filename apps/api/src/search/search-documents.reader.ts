@@ -1,11 +1,13 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, In, type FindOptionsWhere } from 'typeorm';
+import { claimantForReaders } from '../claimants/claimant-view';
 import { ClaimTopic } from '../claims/entities/claim-topic.entity';
 import { Claim } from '../claims/entities/claim.entity';
 import { explainerPlainText } from '@skyledger/explainer';
 import { Publication } from '../publishing/entities/publication.entity';
 import { Source } from '../sources/entities/source.entity';
+import { claimantAsCleared, claimAsCleared } from '../verdicts/claim-as-cleared';
 import { documentId, type SearchDocument } from './search-document';
 
 const BATCH = 5_000;
@@ -65,12 +67,9 @@ export function explainerDocument(publication: Publication): SearchDocument {
     id: documentId('explainer', claim.id),
     type: 'explainer',
     entityId: claim.id,
-    title: claim.summary,
+    title: claimAsCleared(claim, version).summary,
     text: version.bottomLine,
-    claimant:
-      claim.claimant.nameShownPublicly || claim.claimant.kind !== 'private_individual'
-        ? claim.claimant.name
-        : '',
+    claimant: claimantForReaders(claimantAsCleared(claim, version)).name ?? '',
     topics: topicList.join(' '),
     topicList,
     authors: '',
@@ -187,6 +186,7 @@ export class SearchDocumentsReader {
       .innerJoinAndSelect('claim.claimant', 'claimant')
       .leftJoinAndSelect('claim.topics', 'topic')
       .innerJoinAndSelect('p.verdictVersion', 'version')
+      .leftJoinAndSelect('version.claimant', 'clearedClaimant')
       .where("p.state = 'published'")
       .andWhere(
         "NOT EXISTS (SELECT 1 FROM publications later WHERE later.claim_id = p.claim_id AND later.state = 'published' AND later.sequence > p.sequence)",

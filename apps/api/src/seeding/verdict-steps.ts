@@ -108,7 +108,9 @@ async function explainerDocument(
 async function subscribeReader(context: INestApplicationContext, claimId: string, email: string) {
   const manager = context.get(DataSource).manager;
   const claim = await manager.findOneByOrFail(Claim, { id: claimId });
-  await context.get(ReaderSubscriptionsService, { strict: false }).subscribe(claim, email);
+  await context
+    .get(ReaderSubscriptionsService, { strict: false })
+    .subscribe(claim, claim.summary, email);
   await manager.update(
     ReaderSubscription,
     { claimId, email: email.toLowerCase() },

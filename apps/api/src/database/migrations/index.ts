@@ -5,6 +5,7 @@ import { WorkingsAndDatasets1796219107240 } from './1796219107240-WorkingsAndDat
 import { Verdicts1796220519301 } from './1796220519301-Verdicts';
 import { Publishing1796221845244 } from './1796221845244-Publishing';
 import { QueueAndReaderIndexes1796227840239 } from './1796227840239-QueueAndReaderIndexes';
+import { ClaimAsCleared1796299685686 } from './1796299685686-ClaimAsCleared';
 
 /** Every migration in order, listed by class so the same list works from dist/ and under Jest. */
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   Verdicts1796220519301,
   Publishing1796221845244,
   QueueAndReaderIndexes1796227840239,
+  ClaimAsCleared1796299685686,
 ];

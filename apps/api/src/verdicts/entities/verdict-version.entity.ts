@@ -1,6 +1,7 @@
 import { verdictVersionStates, type VerdictVersionState } from '@skyledger/contracts';
 import { type ExplainerDocument } from '@skyledger/explainer';
 import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
+import { Claimant } from '../../claimants/entities/claimant.entity';
 import { ClaimPart } from '../../claims/entities/claim-part';
 import { instantColumn } from '../../database/columns';
 import { RatingLevel } from '../../ratings/entities/rating-level.entity';
@@ -50,4 +51,23 @@ export class VerdictVersion extends ClaimPart {
 
   @Column(instantColumn({ name: 'submitted_at', nullable: true }))
   submittedAt: Date | null;
+
+  /**
+   * The claim as the copy desk cleared it with this version: its words, summary and
+   * claimant, which readers are shown with it. The desk may edit the claim for a
+   * correction; readers see the edit only once a version that has it is cleared and
+   * published. Null until cleared.
+   */
+  @Column({ name: 'claim_text', type: 'text', nullable: true })
+  claimText: string | null;
+
+  @Column({ name: 'claim_summary', type: 'varchar', length: 75, nullable: true })
+  claimSummary: string | null;
+
+  @Column({ name: 'claimant_id', type: 'uuid', nullable: true })
+  claimantId: string | null;
+
+  @ManyToOne(() => Claimant, { nullable: true })
+  @JoinColumn({ name: 'claimant_id' })
+  claimant: Claimant | null;
 }

@@ -1,9 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Button, Flex, Heading } from '@radix-ui/themes';
-import type { ClaimDetail, CurrentUser } from '@skyledger/contracts';
+import { Button, Flex, Heading, Text } from '@radix-ui/themes';
+import type { ClaimDetail, ClaimVerdictView, CurrentUser } from '@skyledger/contracts';
+import { useQuery } from '@tanstack/react-query';
 import { useForm } from 'react-hook-form';
 import { FormError } from '@/components/ui/form-error';
 import type { Notice } from '@/components/ui/toaster';
+import { claimVerdictQueryOptions } from '@/features/verdicts/api/get-claim-verdict';
 import { applyApiError } from '@/lib/form-errors';
 import { useUpdateClaim } from '../../../api/update-claim';
 import {
@@ -15,6 +17,23 @@ import {
 } from '../../../forms/edit-claim-form';
 import { ClaimWordsFields } from '../../shared/claim-words-fields';
 import { staleClaimMessage } from '../claim-messages';
+
+/**
+ * What readers are shown while the claim is edited: the API keeps the claim as the copy
+ * desk cleared it with each version, and reader pages show that one.
+ */
+function readersSee(verdict: ClaimVerdictView | undefined): string | null {
+  const versions = verdict?.versions ?? [];
+  const cleared = versions.find((version) => version.state === 'cleared');
+  if (cleared) {
+    return `The copy desk cleared version ${cleared.number} with the claim as it stood: readers will be shown what was said, its summary and who said it as cleared. A change to those reaches them only with a version cleared after it.`;
+  }
+  const published = versions.find((version) => version.state === 'published');
+  if (published) {
+    return `Readers are shown what was said, its summary and who said it as published with version ${published.number}, until a corrected version is cleared and published.`;
+  }
+  return null;
+}
 
 interface ClaimEditFormProps {
   claim: ClaimDetail;
@@ -28,6 +47,7 @@ interface ClaimEditFormProps {
  */
 export function ClaimEditForm({ claim, user, onDone }: ClaimEditFormProps) {
   const update = useUpdateClaim(claim.id);
+  const note = readersSee(useQuery(claimVerdictQueryOptions(claim.id)).data);
   const {
     control,
     register,
@@ -58,6 +78,11 @@ export function ClaimEditForm({ claim, user, onDone }: ClaimEditFormProps) {
         <Heading as="h2" size="5">
           Edit the claim
         </Heading>
+        {note ? (
+          <Text as="p" size="2" color="gray">
+            {note}
+          </Text>
+        ) : null}
         <FormError message={errors.root?.server?.message} />
         <ClaimWordsFields control={control} register={register} legalLocked={legalLocked} />
         <Flex gap="3" wrap="wrap">
