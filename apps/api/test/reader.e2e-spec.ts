@@ -220,7 +220,7 @@ describe('the reader side over HTTP: pages, feed, oEmbed, captures and subscript
     });
   });
 
-  it('shows readers the claim as the copy desk cleared it, never edits made since', async () => {
+  it('shows readers the claim as the copy desk cleared it, never edits or parts added since', async () => {
     const cleared = 'Hot springs prove the core is heating up';
     const claim = await desk.clearedClaim(cleared);
     const edit = async (fields: object) => {
@@ -253,11 +253,46 @@ describe('the reader side over HTTP: pages, feed, oEmbed, captures and subscript
       text: 'The warm springs near Marrowby show the core is heating up.',
       claimantId: other!.id,
     });
-    const page = await readerText(`/explainers/${clearedSlug}`);
-    expect(page).toContain(`${cleared}, said on the Marrowby phone-in.`);
-    expect(page).toContain(`Claimant of ${cleared}`);
-    expect(page).not.toContain(corrected);
-    expect(page).not.toContain('The core warms the planet, a caller said');
+    await t
+      .http()
+      .post(`/api/claims/${claim.id}/appearances`)
+      .set(desk.as('editor'))
+      .send({
+        url: 'https://post.marrowby.test/letters/2026-11-30',
+        outlet: 'Marrowby Evening Post letters page',
+        seenAt: '2026-11-30T08:00:00+00:00',
+        seenTimeZone: 'Europe/London',
+      })
+      .expect(201);
+    await t
+      .http()
+      .post(`/api/claims/${claim.id}/sources`)
+      .set(desk.as('editor'))
+      .send({
+        source: {
+          title: 'Warm springs of the Marrow valley: where their water comes from',
+          publisher: 'Marrowby Geological Society',
+          year: 2024,
+          kind: 'assessment_report',
+          grade: 'adequate',
+          gradeReason: 'A local survey with its method stated',
+          url: 'https://geology.marrowby.test/warm-springs-2024',
+        },
+      })
+      .expect(201);
+    // Read past the page cache, which would keep the page as rendered before the edits.
+    const shown = (await t.app.get(ReaderService).explainer(clearedSlug))!;
+    expect(shown.claim).toMatchObject({
+      summary: cleared,
+      text: `${cleared}, said on the Marrowby phone-in.`,
+    });
+    expect(shown.claimant.displayName).toBe(`Claimant of ${cleared}`);
+    expect(shown.appearances.map((appearance) => appearance.outlet)).toEqual([
+      'Radio Marrowby phone-in',
+    ]);
+    expect(shown.sources.map((source) => source.title)).toEqual([
+      'Heat flow from the Earth’s interior: analysis of the global data set',
+    ]);
     for (const path of ['/explainers', '/feeds/explainers.atom']) {
       const listed = (await t.http().get(path).expect(200)).text;
       expect(listed).toContain(cleared);
@@ -274,6 +309,8 @@ describe('the reader side over HTTP: pages, feed, oEmbed, captures and subscript
     expect(correctedPage).toContain(corrected);
     expect(correctedPage).toContain('The warm springs near Marrowby show the core is heating up.');
     expect(correctedPage).toContain('Claimant of The core warms the planet, a caller said');
+    expect(correctedPage).toContain('Marrowby Evening Post letters page');
+    expect(correctedPage).toContain('Warm springs of the Marrow valley');
     expect(await readerText(`/explainers/${clearedSlug}/v/1`)).toContain(cleared);
     expect(await readerText('/corrections')).toContain(corrected);
   });

@@ -126,12 +126,18 @@ describe('the generated desk’s workings, verdicts and explainers', () => {
           }
         }
         // What readers are shown with the version: the claim as it was cleared.
-        const asCleared = { text: claim.text, summary: claim.summary, id: claim.claimantId };
-        const none = { text: null, summary: null, id: null };
+        const asCleared = {
+          text: claim.text,
+          summary: claim.summary,
+          id: claim.claimantId,
+          parts: { appearanceIds: [], sourceIds: sourceLinks.map((link) => link.sourceId) },
+        };
+        const none = { text: null, summary: null, id: null, parts: null };
         expect({
           text: version.claimText,
           summary: version.claimSummary,
           id: version.claimantId,
+          parts: version.clearedParts && JSON.parse(version.clearedParts),
         }).toEqual(decisions.some((d) => d.decision === 'cleared') ? asCleared : none);
       }
       if (claim.status !== 'cleared' && claim.status !== 'published') continue;

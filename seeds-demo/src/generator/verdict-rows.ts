@@ -34,6 +34,8 @@ export interface VerdictVersionRow {
   claimText: string | null;
   claimSummary: string | null;
   claimantId: string | null;
+  /** Its appearances and sources then, as JSON text (generated claims have no appearances). */
+  clearedParts: string | null;
   createdAt: Date;
   updatedAt: Date;
   version: number;
@@ -254,8 +256,16 @@ export function* withVerdicts(
         lastEditedById: researcherId,
         submittedAt: state === 'draft' ? null : at(0.5),
         ...(clearedStates.has(state)
-          ? { claimText: claim.text, claimSummary: claim.summary, claimantId: claim.claimantId }
-          : { claimText: null, claimSummary: null, claimantId: null }),
+          ? {
+              claimText: claim.text,
+              claimSummary: claim.summary,
+              claimantId: claim.claimantId,
+              clearedParts: JSON.stringify({
+                appearanceIds: [],
+                sourceIds: filed.sourceLinks.map((link) => link.sourceId),
+              }),
+            }
+          : { claimText: null, claimSummary: null, claimantId: null, clearedParts: null }),
         createdAt: at(0),
         updatedAt: at(0.3),
         version: 1 + verdicts.below(6),

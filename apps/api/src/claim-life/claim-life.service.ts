@@ -21,6 +21,7 @@ import { OutboxWorker } from '../mail/outbox.worker';
 import { clearedMail, sentBackMail, signoffRequestedMail } from '../mail/templates/signoff.mails';
 import { SearchIndexService } from '../search/search-index.service';
 import { User } from '../users/entities/user.entity';
+import { claimAsItStands } from '../verdicts/claim-as-cleared';
 import { SignoffDecisionRecord } from '../verdicts/entities/signoff-decision.entity';
 import { VerdictVersion } from '../verdicts/entities/verdict-version.entity';
 import { signoffChecklist } from '../verdicts/signoff-checklist';
@@ -253,12 +254,8 @@ export class ClaimLifeService {
       );
     }
     version.state = decision;
-    if (decision === 'cleared') {
-      // The claim as the copy desk saw it (the transition checked the claim's version).
-      version.claimText = claim.text;
-      version.claimSummary = claim.summary;
-      version.claimantId = claim.claimantId;
-    }
+    // The claim as the copy desk saw it (the transition checked the claim's version).
+    if (decision === 'cleared') Object.assign(version, await claimAsItStands(manager, claim));
     await manager.save(version);
     await manager.insert(SignoffDecisionRecord, {
       claimId: claim.id,

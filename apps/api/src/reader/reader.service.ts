@@ -24,7 +24,7 @@ import { Dataset } from '../datasets/entities/dataset.entity';
 import { Publication } from '../publishing/entities/publication.entity';
 import { explainerUrl, publicationUrl } from '../publishing/publication-view';
 import { RatingLevel } from '../ratings/entities/rating-level.entity';
-import { claimantAsCleared, claimAsCleared } from '../verdicts/claim-as-cleared';
+import { claimantAsCleared, claimAsCleared, shownWith } from '../verdicts/claim-as-cleared';
 import { ClaimSource } from '../sources/entities/claim-source.entity';
 import { Working } from '../workings/entities/working.entity';
 import { toReaderWorking } from './reader-working';
@@ -94,9 +94,12 @@ export class ReaderService {
     const claimant = claimantForReaders(claimantAsCleared(claim, version));
     const [ratings, sources, workings, appearances] = await Promise.all([
       this.ratings(),
-      this.sources(claim.id, citedSourceIds(version.body)),
+      this.sources(claim.id, citedSourceIds(version.body), shownWith(version, 'sourceIds')),
       this.workings(claim.id, embeddedWorkingIds(version.body)),
-      this.appearances(claim.id, slug, { withheld: claimant.name === null }),
+      this.appearances(claim.id, slug, {
+        withheld: claimant.name === null,
+        shown: shownWith(version, 'appearanceIds'),
+      }),
     ]);
     return {
       slug,
@@ -285,11 +288,12 @@ export class ReaderService {
     // A capture of a private individual's post shows who they are: withheld with the name.
     const claimant = claimantAsCleared(claim, latest.verdictVersion);
     if (claimantForReaders(claimant).name === null) return null;
-    const appearance = await this.dataSource.manager.existsBy(Appearance, {
-      claimId: claim.id,
-      captureAttachmentId: attachmentId,
+    const appearances = await this.dataSource.manager.find(Appearance, {
+      where: { claimId: claim.id, captureAttachmentId: attachmentId },
+      select: { id: true },
     });
-    if (!appearance) return null;
+    const shown = shownWith(latest.verdictVersion, 'appearanceIds');
+    if (!appearances.some((appearance) => shown(appearance.id))) return null;
     return this.dataSource.manager.findOne(Attachment, { where: { id: attachmentId } });
   }
 
@@ -308,13 +312,22 @@ export class ReaderService {
     };
   }
 
-  /** The claim's sources: cited ones first, numbered in order of first citation, then the rest. */
-  private async sources(claimId: string, cited: string[]): Promise<ReaderSource[]> {
-    const links = await this.dataSource.manager.find(ClaimSource, {
-      where: { claimId },
-      relations: { source: true },
-      order: { linkedAt: 'ASC' },
-    });
+  /**
+   * The claim's sources readers are shown: cited ones first, numbered in order of first
+   * citation, then the rest.
+   */
+  private async sources(
+    claimId: string,
+    cited: string[],
+    shown: (sourceId: string) => boolean,
+  ): Promise<ReaderSource[]> {
+    const links = (
+      await this.dataSource.manager.find(ClaimSource, {
+        where: { claimId },
+        relations: { source: true },
+        order: { linkedAt: 'ASC' },
+      })
+    ).filter((link) => shown(link.sourceId) || cited.includes(link.sourceId));
     const order = (id: string) => {
       const index = cited.indexOf(id);
       return index < 0 ? cited.length : index;
@@ -360,19 +373,21 @@ export class ReaderService {
   }
 
   /**
-   * Where the claim was seen. `withheld`: the claimant is a private individual readers may
-   * not name, and an address or a capture (their profile, their post) could name them, so
-   * only the outlet and the time are given.
+   * Where the claim was seen, of the appearances readers are shown (`shown`). `withheld`:
+   * the claimant is a private individual readers may not name, and an address or a capture
+   * (their profile, their post) could name them, so only the outlet and the time are given.
    */
   private async appearances(
     claimId: string,
     slug: string,
-    { withheld }: { withheld: boolean },
+    { withheld, shown }: { withheld: boolean; shown: (appearanceId: string) => boolean },
   ): Promise<ReaderAppearance[]> {
-    const appearances = await this.dataSource.manager.find(Appearance, {
-      where: { claimId },
-      order: { seenAt: 'ASC', id: 'ASC' },
-    });
+    const appearances = (
+      await this.dataSource.manager.find(Appearance, {
+        where: { claimId },
+        order: { seenAt: 'ASC', id: 'ASC' },
+      })
+    ).filter((appearance) => shown(appearance.id));
     return appearances.map((appearance) => ({
       outlet: appearance.outlet,
       seenAt: appearance.seenAt.toISOString(),

@@ -7,6 +7,11 @@ import { instantColumn } from '../../database/columns';
 import { RatingLevel } from '../../ratings/entities/rating-level.entity';
 import { User } from '../../users/entities/user.entity';
 
+export interface ClearedParts {
+  appearanceIds: string[];
+  sourceIds: string[];
+}
+
 /**
  * One version of a claim's verdict: rating, bottom line and explainer. A draft changes
  * with every save; submitting for sign-off freezes it. `createdBy` drafted it.
@@ -54,7 +59,7 @@ export class VerdictVersion extends ClaimPart {
 
   /**
    * The claim as the copy desk cleared it with this version: its words, summary and
-   * claimant, which readers are shown with it. The desk may edit the claim for a
+   * claimant, which readers are shown with it (and `clearedParts`). The desk may edit the claim for a
    * correction; readers see the edit only once a version that has it is cleared and
    * published. Null until cleared.
    */
@@ -70,4 +75,8 @@ export class VerdictVersion extends ClaimPart {
   @ManyToOne(() => Claimant, { nullable: true })
   @JoinColumn({ name: 'claimant_id' })
   claimant: Claimant | null;
+
+  /** Which appearances and sources the claim had when cleared: those readers are shown. */
+  @Column({ name: 'cleared_parts', type: 'json', nullable: true })
+  clearedParts: ClearedParts | null;
 }
