@@ -236,6 +236,17 @@ describe('the reader side over HTTP: pages, feed, oEmbed, captures and subscript
     await edit({ summary: 'Hot springs show the core heats up fast' });
     const clearedSlug = await desk.publishNow(claim.id);
     expect(clearedSlug).toBe('hot-springs-prove-the-core-is-heating-up');
+    // The desk sees what the version keeps, for the copy desk to compare a correction with.
+    const verdict = await t
+      .http()
+      .get(`/api/claims/${claim.id}/verdict`)
+      .set(desk.as('copy'))
+      .expect(200);
+    expect(verdict.body.versions[0].claimAsCleared).toEqual({
+      text: `${cleared}, said on the Marrowby phone-in.`,
+      summary: cleared,
+      claimantName: `Claimant of ${cleared}`,
+    });
     const readerText = async (path: string) =>
       textOf(parse((await t.http().get(path).expect(200)).text) as unknown as HtmlNode);
     expect(await readerText(`/explainers/${clearedSlug}`)).toContain(cleared);

@@ -69,6 +69,7 @@ export const draftVersion: VerdictVersionView = {
   createdAt: '2026-11-20T09:00:00.000Z',
   updatedAt: '2026-11-20T09:30:00.000Z',
   submittedAt: null,
+  claimAsCleared: null,
   decisions: [],
   version: 3,
 };

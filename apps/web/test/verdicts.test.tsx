@@ -311,6 +311,46 @@ describe('the sign-off view', { timeout: 20_000 }, () => {
     expect(screen.getByText(/Workings are back-of-envelope estimates/)).toBeInTheDocument();
   });
 
+  it('shows how a correction changes the claim readers are shown, against the cleared one', async () => {
+    const cleared = {
+      text: awaitingClaim.text,
+      summary: 'The core, not greenhouse gases, warms the planet',
+      claimantName: 'A Marrowby caller',
+    };
+    mockApi(
+      signoffRoutes(
+        'copy_desk',
+        signoffView({
+          previous: { ...sentBackVersion, state: 'published', claimAsCleared: cleared },
+        }),
+      ),
+    );
+    renderApp(`/claims/${coreClaim.id}/signoff`);
+
+    const changes = await screen.findByRole('region', { name: 'Changes since version 1' });
+    expect(
+      within(changes).getByRole('heading', { name: 'The claim readers are shown' }),
+    ).toBeInTheDocument();
+    expect(
+      within(changes).getByText(`Who said it: A Marrowby caller → ${awaitingClaim.claimant.name}`),
+    ).toBeInTheDocument();
+    const summary = within(changes).getByRole('heading', { name: 'Summary' }).parentElement!;
+    expect(summary).toHaveTextContent('3 words added, 2 removed.');
+    expect(summary).toHaveTextContent('[removed: warms][added: is warming]');
+    const said = within(changes).getByRole('heading', { name: 'What was said' }).parentElement!;
+    expect(said).toHaveTextContent('Unchanged.');
+  });
+
+  it('compares no claim when the version before was never cleared', async () => {
+    mockApi(signoffRoutes('copy_desk'));
+    renderApp(`/claims/${coreClaim.id}/signoff`);
+    const changes = await screen.findByRole('region', { name: 'Changes since version 1' });
+    expect(within(changes).getByRole('heading', { name: 'Explainer' })).toBeInTheDocument();
+    expect(
+      within(changes).queryByRole('heading', { name: 'The claim readers are shown' }),
+    ).not.toBeInTheDocument();
+  });
+
   it('asks for notes before sending back, then sends them with the claim’s version', async () => {
     const fake = mockApi({
       ...signoffRoutes('copy_desk'),

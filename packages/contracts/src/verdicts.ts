@@ -113,8 +113,17 @@ export interface VerdictVersionView {
   createdAt: string;
   updatedAt: string;
   submittedAt: string | null;
+  /** The claim as the copy desk cleared it with this version (readers' copy); null until cleared. */
+  claimAsCleared: ClaimAsCleared | null;
   decisions: SignoffDecisionView[];
   version: number;
+}
+
+/** What readers are shown of the claim with a version: its words, summary and who said it. */
+export interface ClaimAsCleared {
+  text: string;
+  summary: string;
+  claimantName: string;
 }
 
 /** A save that lost to another's: kept so its text can be recovered. */

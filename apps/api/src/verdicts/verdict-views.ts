@@ -22,7 +22,7 @@ export function toSignoffDecisionView(record: SignoffDecisionRecord): SignoffDec
   };
 }
 
-/** Needs `createdBy` and `lastEditedBy` loaded. */
+/** Needs `createdBy`, `lastEditedBy` and `claimant` loaded. */
 export function toVerdictVersionView(
   version: VerdictVersion,
   decisions: SignoffDecisionRecord[] = [],
@@ -43,6 +43,14 @@ export function toVerdictVersionView(
     createdAt: version.createdAt.toISOString(),
     updatedAt: version.updatedAt.toISOString(),
     submittedAt: version.submittedAt?.toISOString() ?? null,
+    claimAsCleared:
+      version.claimText !== null && version.claimSummary !== null && version.claimant
+        ? {
+            text: version.claimText,
+            summary: version.claimSummary,
+            claimantName: version.claimant.name,
+          }
+        : null,
     decisions: decisions
       .filter((decision) => decision.versionId === version.id)
       .map(toSignoffDecisionView),

@@ -21,7 +21,7 @@ import { VerdictVersion } from './entities/verdict-version.entity';
 import { prepareExplainerBody } from './verdict-body';
 import { toVerdictConflictView, toVerdictVersionView } from './verdict-views';
 
-const versionRelations = { createdBy: true, lastEditedBy: true } as const;
+const versionRelations = { createdBy: true, lastEditedBy: true, claimant: true } as const;
 
 /** A save refused for its stale version, carrying what it tried to save. */
 class StaleDraftSave extends Error {

@@ -1,5 +1,10 @@
 import { Flex, Heading, Text, VisuallyHidden } from '@radix-ui/themes';
-import type { ClaimSourceView, RatingLevelView, VerdictVersionView } from '@skyledger/contracts';
+import type {
+  ClaimAsCleared,
+  ClaimSourceView,
+  RatingLevelView,
+  VerdictVersionView,
+} from '@skyledger/contracts';
 import { explainerPlainText } from '@skyledger/explainer';
 import { diffWords } from 'diff';
 import { useMemo } from 'react';
@@ -89,6 +94,25 @@ export function VersionDiff({ before, after, sources }: VersionDiffProps) {
       </Text>
       <WordDiff title="Bottom line" before={before.bottomLine} after={after.bottomLine} />
       <WordDiff title="Explainer" before={plain(before.body)} after={plain(after.body)} />
+    </Flex>
+  );
+}
+
+/**
+ * How the claim readers are shown changes: as cleared with an earlier version, against
+ * the claim as it stands, which clearing this version gives readers.
+ */
+export function ClaimDiff({ before, after }: { before: ClaimAsCleared; after: ClaimAsCleared }) {
+  return (
+    <Flex direction="column" gap="3">
+      <Text size="2">
+        Who said it:{' '}
+        {before.claimantName === after.claimantName
+          ? 'unchanged'
+          : `${before.claimantName} → ${after.claimantName}`}
+      </Text>
+      <WordDiff title="What was said" before={before.text} after={after.text} />
+      <WordDiff title="Summary" before={before.summary} after={after.summary} />
     </Flex>
   );
 }

@@ -12,7 +12,7 @@ import { useWorkingsOnHand } from '../../hooks/use-workings-on-hand';
 import '../../verdicts.css';
 import { ClaimVerdictHeader } from '../claim-verdict-header';
 import { VerdictVersionBody } from '../verdict-version-view';
-import { VersionDiff } from '../version-diff';
+import { ClaimDiff, VersionDiff } from '../version-diff';
 import { DecisionPanel } from './decision-panel';
 import { SignoffChecklist } from './signoff-checklist';
 import { WaiveReplyDialog } from './waive-reply-dialog';
@@ -89,7 +89,28 @@ export function SignoffPage({ claimId, user }: { claimId: string; user: CurrentU
                         : 'Changes since the last version'}
                     </Heading>
                     {previous ? (
-                      <VersionDiff before={previous} after={version} sources={claim.sources} />
+                      <>
+                        <VersionDiff before={previous} after={version} sources={claim.sources} />
+                        {previous.claimAsCleared ? (
+                          <Flex direction="column" gap="3">
+                            <Heading as="h3" size="3">
+                              The claim readers are shown
+                            </Heading>
+                            <Text size="2" color="gray">
+                              As cleared with version {previous.number}, against the claim as it
+                              stands now, which clearing this version gives readers.
+                            </Text>
+                            <ClaimDiff
+                              before={previous.claimAsCleared}
+                              after={{
+                                text: claim.text,
+                                summary: claim.summary,
+                                claimantName: claim.claimant.name,
+                              }}
+                            />
+                          </Flex>
+                        ) : null}
+                      </>
                     ) : (
                       <Text>
                         This is the first version submitted: there is nothing to compare with.
