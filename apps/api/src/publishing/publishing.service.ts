@@ -13,12 +13,12 @@ import { OutboxWorker } from '../mail/outbox.worker';
 import { publishedMail, scheduledPublishedMail } from '../mail/templates/publishing.mails';
 import { SearchIndexService } from '../search/search-index.service';
 import { User } from '../users/entities/user.entity';
+import { claimAsCleared } from '../verdicts/claim-as-cleared';
 import { VerdictVersion } from '../verdicts/entities/verdict-version.entity';
 import { type PublishClaimDto } from './dto/publish-claim.dto';
 import { Publication } from './entities/publication.entity';
 import { explainerUrl, toPublicationView } from './publication-view';
 import { ReaderSubscriptionsService } from './reader-subscriptions.service';
-import { claimAsCleared } from '../verdicts/claim-as-cleared';
 import { uniqueSlug } from './slug';
 
 /** A scheduled instant must be at least this far ahead, so it is not in the past on arrival. */

@@ -282,6 +282,16 @@ export class ReaderService {
     const latest = await this.dataSource.manager.findOne(Publication, {
       where: { claimId: claim.id, state: 'published', publishedAt: LessThanOrEqual(new Date()) },
       relations: { verdictVersion: { claimant: true } },
+      // Who said it and which appearances it had, not the explainer's body.
+      select: {
+        id: true,
+        sequence: true,
+        verdictVersion: {
+          id: true,
+          clearedParts: true,
+          claimant: { id: true, name: true, kind: true, nameShownPublicly: true },
+        },
+      },
       order: { sequence: 'DESC' },
     });
     if (!latest) return null;
