@@ -137,6 +137,11 @@ describe.each([
     expect(await entityIds('volc')).toEqual(expect.arrayContaining([ids.volcano, ids.source]));
   });
 
+  it('matches only the last word as a prefix: the words before it are whole', async () => {
+    expect(await entityIds('heat geother')).toEqual([ids.core]);
+    expect(await entityIds('geother heat')).toEqual([]);
+  });
+
   it('searches claimants, topics and source authors too', async () => {
     expect(await entityIds('Threlkeld')).toEqual([ids.core]);
     expect(await entityIds('Aiuppa')).toEqual([ids.source]);

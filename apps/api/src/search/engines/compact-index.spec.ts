@@ -193,3 +193,15 @@ describe('CompactIndex: common words in an any search', () => {
     for (const result of expected) expect(found.get(result.id)).toBeCloseTo(result.score, 9);
   });
 });
+
+describe('CompactIndex: words it learns', () => {
+  it('finds a word, and its misspellings, as soon as a document brings it', () => {
+    const growing = new CompactIndex(1, wordsOf);
+    growing.add(['the harbour wall at marrowby']);
+    const typed = { prefix: true, typos: 1 };
+    expect(growing.derive('seawal', typed)).toEqual([]);
+    growing.add(['the seawall was raised']);
+    expect(growing.derive('seawal', typed).map((derived) => derived.term)).toEqual(['seawall']);
+    expect(growing.derive('seawal', { prefix: false, typos: 1 })).toHaveLength(1);
+  });
+});

@@ -15,6 +15,8 @@ import { withRoom } from './typed-arrays';
 const BM25 = { k: 1.2, b: 0.7, d: 0.5 };
 const PREFIX_WEIGHT = 0.375;
 const FUZZY_WEIGHT = 0.45;
+/** Query words whose derived words are kept at most (`derive`). */
+const DERIVED_KEPT_MAX = 10_000;
 /** The mark of a slot the filters left out, so it is not asked again in the same search. */
 const REJECTED = -1;
 
@@ -82,7 +84,7 @@ export interface DerivedTerm {
 
 /** One query word (or synonym): what it matched becomes the document's `matchedTerms`. */
 export interface SourceTerm {
-  derived: DerivedTerm[];
+  derived: readonly DerivedTerm[];
 }
 
 /** Words of which a document must match at least one (all groups, for `all` queries). */
@@ -103,6 +105,12 @@ const commonWords = { share: 0.05, rarest: 1.25, floor: 1_000 } as const;
 
 /** The per-slot arrays a search fills. */
 interface Scratch {
+  /**
+   * The slots a search has touched, in the order found: the first `touchedCount`. Growing
+   * a plain array to tens of thousands of slots took a third of a similar-claims search.
+   */
+  touched: Int32Array;
+  touchedCount: number;
   scores: Float64Array;
   /** Per slot: the last query word and group counted (packed), or `REJECTED`. */
   marks: Int32Array;
@@ -134,7 +142,7 @@ class PostingScorer {
   private readonly groupsMet: Uint16Array;
 
   constructor(
-    scratch: Scratch,
+    private readonly scratch: Scratch,
     private readonly posting: Posting,
     private readonly lengths: Uint16Array,
     private readonly parts: ScoreParts,
@@ -147,8 +155,8 @@ class PostingScorer {
     } = scratch);
   }
 
-  /** Every slot listed, adding the new ones to `touched` (each asked of `accept` once). */
-  walk(touched: number[], accept: (slot: number) => boolean): void {
+  /** Every slot listed, adding the new ones to the touched (each asked of `accept` once). */
+  walk(accept: (slot: number) => boolean): void {
     const { marks, groupsMet } = this;
     const { slots, counts, size } = this.posting;
     const { earlierGroups } = this.parts;
@@ -159,7 +167,8 @@ class PostingScorer {
       const mark = marks[slot]!;
       if (mark === REJECTED) continue;
       if (mark === 0) {
-        touched.push(slot);
+        this.scratch.touched[this.scratch.touchedCount] = slot;
+        this.scratch.touchedCount += 1;
         if (!accept(slot)) {
           marks[slot] = REJECTED;
           continue;
@@ -173,7 +182,7 @@ class PostingScorer {
    * Only the slots already found (`found`, ascending): by galloping through the posting
    * when they are few beside it, else by walking it and passing over the others.
    */
-  probe(found: readonly number[]): void {
+  probe(found: Int32Array): void {
     const { marks } = this;
     const { slots, counts, size } = this.posting;
     if (found.length * 4 > size) {
@@ -231,6 +240,7 @@ export class CompactIndex {
   private readonly termsByLength = new Map<number, number[]>();
   private sortedTerms: string[] = [];
   private sortedDirty = false;
+  private readonly derivedKept = new Map<string, readonly DerivedTerm[]>();
   private readonly lengths: Uint16Array[];
   private readonly lengthSums: number[];
   private liveCount = 0;
@@ -239,6 +249,8 @@ export class CompactIndex {
   private totalPostings = 0;
   /** Per-search scratch, reused: only the slots a search touches are cleared after it. */
   private scratch: Scratch = {
+    touched: new Int32Array(0),
+    touchedCount: 0,
     scores: new Float64Array(0),
     marks: new Int32Array(0),
     quality: new Uint16Array(0),
@@ -317,8 +329,24 @@ export class CompactIndex {
     this.deadPostings = 0;
   }
 
-  /** The index's own words that `word` stands for: itself, words it begins, near misspellings. */
-  derive(word: string, options: { prefix: boolean; typos: number }): DerivedTerm[] {
+  /**
+   * The index's own words that `word` stands for: itself, words it begins, near
+   * misspellings. Kept until the index learns a new word: finding the misspellings compares
+   * the word with thousands, and a claim being typed asks again for every word at each
+   * pause.
+   */
+  derive(word: string, options: { prefix: boolean; typos: number }): readonly DerivedTerm[] {
+    const key = `${options.prefix ? '+' : '='}${options.typos}${word}`;
+    let derived = this.derivedKept.get(key);
+    if (!derived) {
+      if (this.derivedKept.size >= DERIVED_KEPT_MAX) this.derivedKept.clear();
+      derived = this.deriveAfresh(word, options);
+      this.derivedKept.set(key, derived);
+    }
+    return derived;
+  }
+
+  private deriveAfresh(word: string, options: { prefix: boolean; typos: number }): DerivedTerm[] {
     const derived: DerivedTerm[] = [];
     if (this.termIds.has(word)) derived.push({ term: word, weight: 1 });
     const seen = new Set([word]);
@@ -365,18 +393,21 @@ export class CompactIndex {
     visit: (slot: number, score: number) => void,
   ): void {
     this.grow(this.slotCount);
-    const { scores, marks, quality, groupsMet } = this.scratch;
-    const touched: number[] = [];
-    let found: number[] | undefined;
+    const scratch = this.scratch;
+    const { scores, marks, quality, groupsMet } = scratch;
+    scratch.touchedCount = 0;
+    let found: Int32Array | undefined;
     this.inSearchOrder(groups, all).forEach((word, index) => {
       if (!word.common) {
-        this.scorers(word, index, all, boosts, (scorer) => scorer.walk(touched, accept));
+        this.scorers(word, index, all, boosts, (scorer) => scorer.walk(accept));
         return;
       }
-      found ??= touched.filter((slot) => marks[slot] !== REJECTED).sort((a, b) => a - b);
+      found ??= this.foundSoFar();
       this.scorers(word, index, all, boosts, (scorer) => scorer.probe(found!));
     });
-    for (const slot of touched) {
+    const { touched, touchedCount } = scratch;
+    for (let i = 0; i < touchedCount; i += 1) {
+      const slot = touched[i]!;
       if (marks[slot] !== REJECTED && (!all || groupsMet[slot] === groups.length)) {
         visit(slot, scores[slot]! * quality[slot]!);
       }
@@ -385,6 +416,18 @@ export class CompactIndex {
       quality[slot] = 0;
       groupsMet[slot] = 0;
     }
+  }
+
+  /** The slots touched and accepted so far, ascending. */
+  private foundSoFar(): Int32Array {
+    const { touched, touchedCount, marks } = this.scratch;
+    const found = new Int32Array(touchedCount);
+    let size = 0;
+    for (let i = 0; i < touchedCount; i += 1) {
+      if (marks[touched[i]!] !== REJECTED) found[size++] = touched[i]!;
+    }
+    // A typed array sorts numbers natively, many times faster than with a comparator.
+    return found.subarray(0, size).sort();
   }
 
   /** Hands `use` a scorer for each posting of one query word, the `index`-th walked. */
@@ -465,6 +508,7 @@ export class CompactIndex {
       sameLength.push(id);
       this.termsByLength.set(word.length, sameLength);
       this.sortedDirty = true;
+      this.derivedKept.clear();
     }
     return id;
   }
@@ -494,8 +538,10 @@ export class CompactIndex {
   private grow(slots: number): void {
     if (this.scratch.scores.length >= slots && this.lengths[0]!.length >= slots) return;
     const size = Math.max(1024, slots * 2);
-    const { scores, marks, quality, groupsMet } = this.scratch;
+    const { touched, scores, marks, quality, groupsMet } = this.scratch;
     this.scratch = {
+      touched: withRoom(touched, slots, size),
+      touchedCount: 0,
       scores: withRoom(scores, slots, size),
       marks: withRoom(marks, slots, size),
       quality: withRoom(quality, slots, size),

@@ -21,8 +21,12 @@ import { SlotColumns } from './slot-columns';
  */
 export const typoAllowance = (term: string) => (term.length >= 9 ? 2 : term.length >= 5 ? 1 : 0);
 
-/** Prefix matching from three letters on, for type-ahead. */
-export const prefixAllowed = (term: string) => term.length >= 3;
+/**
+ * Prefix matching from three letters on, for type-ahead: of the query's last word only,
+ * the one still being typed, as Meilisearch matches. A word followed by others is whole;
+ * matched as a prefix, a typed sentence's "car" also found every claim about carbon.
+ */
+export const prefixAllowed = (term: string, last: boolean) => last && term.length >= 3;
 
 /**
  * Little words, matched only as written when a claim is typed in full for similar claims.
@@ -171,12 +175,13 @@ export class EmbeddedSearchEngine extends SearchEngine {
 
   /** Each word of the query, or one of its synonyms, as the index's own words. */
   private groupsOf(q: string, match: EngineQuery['match']): TermGroup[] {
-    return [...new Set(wordsOf(q))].map((word) => {
+    const words = wordsOf(q);
+    return [...new Set(words)].map((word) => {
       const asWritten = match === 'any' && stopWords.has(word);
       return [
         {
           derived: this.index.derive(word, {
-            prefix: !asWritten && prefixAllowed(word),
+            prefix: !asWritten && prefixAllowed(word, word === words.at(-1)),
             typos: asWritten ? 0 : typoAllowance(word),
           }),
         },
