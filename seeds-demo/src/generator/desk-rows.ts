@@ -236,6 +236,7 @@ export function* claimRows(
     const status = random.weighted(statusWeights(ageDays));
     const claimant = options.claimants[random.skewedIndex(options.claimants.length)]!;
     const pattern = claimPatterns[Number(random.weighted(patternWeights))]!;
+    const phrasing = random.pick(pattern.phrasings);
     const year = createdAt.getUTCFullYear() - 1 - random.below(12);
     const place = random.pick(places);
     const fillIn = (template: string) =>
@@ -273,8 +274,8 @@ export function* claimRows(
     yield {
       claim: {
         id,
-        text: fillIn(pattern.text),
-        summary: fillIn(pattern.summary),
+        text: fillIn(phrasing.text),
+        summary: fillIn(phrasing.summary),
         status,
         legalReview,
         claimantId: claimant.id,

@@ -6,9 +6,18 @@ import { type ReliabilityGrade, type SourceKind } from '@skyledger/contracts';
  * names, places, publishers and sources. Generated rows are for scale tests and the
  * benchmark, never the demo.
  */
-export interface ClaimPattern {
+/** One way of putting a kind of claim: what was said, and the desk's one-line summary of it. */
+export interface Phrasing {
   summary: string;
   text: string;
+}
+
+export interface ClaimPattern {
+  /**
+   * The ways it is put, each as likely. A kind of claim recurs in different words, and a
+   * search index over one sentence copied thousands of times measures nothing a desk sees.
+   */
+  phrasings: readonly Phrasing[];
   topics: readonly string[];
   /** How often this kind of claim turns up, relative to the others. */
   weight: number;
@@ -102,8 +111,24 @@ export const updateNotes = {
 /** `{place}` and `{year}` are filled in per claim. */
 export const claimPatterns: readonly ClaimPattern[] = [
   {
-    summary: 'Heat from the Earth’s core is what warms {place}',
-    text: 'The ground under {place} is warming us from below; the core is getting hotter.',
+    phrasings: [
+      {
+        summary: 'Heat from the Earth’s core is what warms {place}',
+        text: 'The ground under {place} is warming us from below; the core is getting hotter.',
+      },
+      {
+        summary: 'Warming in {place} comes up from the ground, not the sky',
+        text: 'The heat is rising out of the rock under {place}; the planet is cooking from the inside.',
+      },
+      {
+        summary: 'Geothermal heat explains the milder winters around {place}',
+        text: 'Molten rock close to the surface near {place} is why our winters have gone mild since {year}.',
+      },
+      {
+        summary: 'The planet’s hot interior, not gases, drives the warming',
+        text: 'Forget the gases: the Earth’s interior gives off far more heat than any chimney ever could.',
+      },
+    ],
     topics: ['geothermal', 'energy-budget'],
     weight: 6,
     calculations: ['geothermal-flux'],
@@ -117,8 +142,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'The sun has been getting brighter since {year}',
-    text: 'Since {year} the sun has simply been putting out more heat, and that is all warming is.',
+    phrasings: [
+      {
+        summary: 'The sun has been getting brighter since {year}',
+        text: 'Since {year} the sun has simply been putting out more heat, and that is all warming is.',
+      },
+      {
+        summary: 'Solar output explains every degree of recent warming',
+        text: 'It is the sun. Solar activity climbed after {year} and the temperatures simply followed it.',
+      },
+      {
+        summary: 'A stronger sun, not carbon dioxide, warmed {place}',
+        text: 'Sunshine hours in {place} are up since {year}; a stronger sun is the whole story.',
+      },
+      {
+        summary: 'Sunspot cycles control our temperatures',
+        text: 'Count the sunspots and you can predict the temperature; every warm spell follows a busy solar cycle.',
+      },
+    ],
     topics: ['solar', 'attribution'],
     weight: 8,
     calculations: ['solar-change'],
@@ -132,8 +173,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'Global warming stopped in {year}',
-    text: 'There has been no warming since {year}; the record has been flat ever since.',
+    phrasings: [
+      {
+        summary: 'Global warming stopped in {year}',
+        text: 'There has been no warming since {year}; the record has been flat ever since.',
+      },
+      {
+        summary: 'There has been a pause in warming since {year}',
+        text: 'Temperatures have gone sideways since {year}; the so-called crisis paused years ago.',
+      },
+      {
+        summary: 'The planet has been cooling since {year}',
+        text: 'Global temperatures peaked in {year} and have been sliding downwards ever since.',
+      },
+      {
+        summary: 'Thermometers around {place} show no rise since {year}',
+        text: 'Our readings in {place} have not budged since {year}, whatever the headlines say.',
+      },
+    ],
     topics: ['temperature-record', 'trends'],
     weight: 10,
     calculations: ['sensitivity'],
@@ -147,8 +204,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'CO2 is too small a share of the air to matter',
-    text: 'Carbon dioxide is only 0.04 per cent of the atmosphere, far too little to change anything.',
+    phrasings: [
+      {
+        summary: 'CO2 is too small a share of the air to matter',
+        text: 'Carbon dioxide is only 0.04 per cent of the atmosphere, far too little to change anything.',
+      },
+      {
+        summary: 'A trace gas cannot heat a whole planet',
+        text: 'Four molecules in every ten thousand cannot possibly control the climate of an entire planet.',
+      },
+      {
+        summary: 'Carbon dioxide is too dilute to trap meaningful heat',
+        text: 'There is so little carbon dioxide up there that its effect on heat must be negligible.',
+      },
+      {
+        summary: 'Human CO2 is a tiny fraction of a tiny fraction',
+        text: 'Humans make three per cent of a gas that is 0.04 per cent of the air; that is nothing.',
+      },
+    ],
     topics: ['carbon-dioxide', 'greenhouse-effect'],
     weight: 9,
     calculations: ['co2-forcing'],
@@ -162,8 +235,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'Water vapour, not CO2, does all the greenhouse warming',
-    text: 'Water vapour is the real greenhouse gas; carbon dioxide is a rounding error.',
+    phrasings: [
+      {
+        summary: 'Water vapour, not CO2, does all the greenhouse warming',
+        text: 'Water vapour is the real greenhouse gas; carbon dioxide is a rounding error.',
+      },
+      {
+        summary: 'Humidity, not carbon dioxide, controls the temperature',
+        text: 'Humidity drives the temperature; blaming carbon dioxide ignores ninety-five per cent of the effect.',
+      },
+      {
+        summary: 'Moisture outweighs any effect of CO2',
+        text: 'Moisture in the air around {place} does the real work of holding heat in, not carbon.',
+      },
+      {
+        summary: 'Carbon dioxide’s role is swamped by water vapour',
+        text: 'Steam from the sea dwarfs every tonne of carbon dioxide that people have ever emitted.',
+      },
+    ],
     topics: ['water-vapour', 'greenhouse-effect'],
     weight: 5,
     calculations: ['greenhouse-layer'],
@@ -177,8 +266,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'Volcanoes put out more CO2 than people do',
-    text: 'One eruption near {place} released more carbon dioxide than all our cars in a year.',
+    phrasings: [
+      {
+        summary: 'Volcanoes put out more CO2 than people do',
+        text: 'One eruption near {place} released more carbon dioxide than all our cars in a year.',
+      },
+      {
+        summary: 'Undersea eruptions emit more carbon than industry',
+        text: 'Thousands of hidden volcanoes under the oceans pump out more carbon than every factory on Earth.',
+      },
+      {
+        summary: 'A single volcano undoes all our emissions cuts',
+        text: 'The {year} eruption cancelled out every emissions cut the council in {place} ever made.',
+      },
+      {
+        summary: 'Natural vents outgas far more CO2 than humanity',
+        text: 'Vents and fissures leak more carbon dioxide each year than all human activity put together.',
+      },
+    ],
     topics: ['volcanoes', 'carbon-dioxide'],
     weight: 5,
     calculations: ['carbon-units'],
@@ -192,8 +297,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'Cosmic rays set the climate through the clouds',
-    text: 'Cosmic rays seed the clouds, and the clouds decide the temperature, not us.',
+    phrasings: [
+      {
+        summary: 'Cosmic rays set the climate through the clouds',
+        text: 'Cosmic rays seed the clouds, and the clouds decide the temperature, not us.',
+      },
+      {
+        summary: 'Galactic particles drive cloud cover and the climate',
+        text: 'Particles from exploding stars make clouds, and cloud cover is what really controls the climate.',
+      },
+      {
+        summary: 'A weaker solar wind lets in rays that change the weather',
+        text: 'When the solar wind weakens, more cosmic rays arrive, more clouds form and the weather shifts.',
+      },
+      {
+        summary: 'Fewer cosmic rays since {year} explain the warming',
+        text: 'Fewer cosmic rays since {year} means fewer clouds over {place} and more sunshine getting through.',
+      },
+    ],
     topics: ['cosmic-rays', 'clouds'],
     weight: 3,
     calculations: ['energy-balance'],
@@ -207,8 +328,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'The oceans are heated by undersea volcanoes',
-    text: 'The sea off {place} is warming because of volcanoes on the seabed.',
+    phrasings: [
+      {
+        summary: 'The oceans are heated by undersea volcanoes',
+        text: 'The sea off {place} is warming because of volcanoes on the seabed.',
+      },
+      {
+        summary: 'Seabed vents are heating the bay off {place}',
+        text: 'Hot springs on the seabed explain why the bay off {place} is warmer every summer.',
+      },
+      {
+        summary: 'Ocean warming comes from below, not from the air',
+        text: 'The oceans are warming from the bottom up, which no amount of carbon dioxide could do.',
+      },
+      {
+        summary: 'Hidden eruptions are behind marine heatwaves',
+        text: 'The marine heatwave of {year} was caused by eruptions nobody bothered to monitor.',
+      },
+    ],
     topics: ['ocean-heat', 'volcanoes'],
     weight: 3,
     calculations: ['ocean-heat', 'geothermal-flux'],
@@ -222,8 +359,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'The {year} cold snap in {place} disproves global warming',
-    text: 'We had snow in {place} in {year}. So much for global warming.',
+    phrasings: [
+      {
+        summary: 'The {year} cold snap in {place} disproves global warming',
+        text: 'We had snow in {place} in {year}. So much for global warming.',
+      },
+      {
+        summary: 'A harsh winter in {place} shows the planet is not warming',
+        text: 'The frost in {place} lasted for weeks in {year}; tell me again about the warming planet.',
+      },
+      {
+        summary: 'Record cold in {year} proves climate models wrong',
+        text: 'Record lows across the county in {year} prove the climate models have it backwards.',
+      },
+      {
+        summary: 'Snowfall in {place} rules out global warming',
+        text: 'If the world were heating up, {place} would not have been buried in snow in {year}.',
+      },
+    ],
     topics: ['temperature-record', 'weather-vs-climate'],
     weight: 7,
     calculations: [],
@@ -236,8 +389,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'The {place} weather station was moved to make it warmer',
-    text: 'They moved the {place} station next to a car park in {year} and called it warming.',
+    phrasings: [
+      {
+        summary: 'The {place} weather station was moved to make it warmer',
+        text: 'They moved the {place} station next to a car park in {year} and called it warming.',
+      },
+      {
+        summary: 'The {place} thermometer sits beside a heat source',
+        text: 'The thermometer in {place} is right beside an air-conditioning vent, so of course it reads high.',
+      },
+      {
+        summary: 'Temperature records at {place} were adjusted upwards',
+        text: 'The records for {place} were quietly adjusted in {year} to manufacture a warming trend.',
+      },
+      {
+        summary: 'Relocated stations explain the warming in {place}',
+        text: 'Half the stations near {place} were relocated to airfields, where tarmac makes them warmer.',
+      },
+    ],
     topics: ['station-data', 'urban-heat'],
     weight: 4,
     calculations: [],
@@ -250,8 +419,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'Sea level at {place} has not risen since {year}',
-    text: 'The harbour wall at {place} has the same high-water mark as in {year}.',
+    phrasings: [
+      {
+        summary: 'Sea level at {place} has not risen since {year}',
+        text: 'The harbour wall at {place} has the same high-water mark as in {year}.',
+      },
+      {
+        summary: 'Tide gauges at {place} show no sea-level rise',
+        text: 'The tide gauge in {place} shows the sea exactly where it stood in {year}.',
+      },
+      {
+        summary: 'The sea at {place} is falling, not rising',
+        text: 'Boats at {place} moor lower than they did in {year}; the sea is dropping.',
+      },
+      {
+        summary: 'Flooding at {place} has nothing to do with the sea',
+        text: 'The quay at {place} floods because the land is sinking, not because the sea is rising.',
+      },
+    ],
     topics: ['sea-level'],
     weight: 5,
     calculations: [],
@@ -264,8 +449,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'Arctic sea ice has recovered to its {year} extent',
-    text: 'The Arctic ice is back where it was in {year}; the melt has reversed.',
+    phrasings: [
+      {
+        summary: 'Arctic sea ice has recovered to its {year} extent',
+        text: 'The Arctic ice is back where it was in {year}; the melt has reversed.',
+      },
+      {
+        summary: 'Polar ice is growing again',
+        text: 'The polar ice caps are growing again, and the scientists have gone quiet about it.',
+      },
+      {
+        summary: 'Sea ice in {year} was the thickest in decades',
+        text: 'Satellite pictures show the ice in {year} was thicker than it has been for decades.',
+      },
+      {
+        summary: 'Antarctic gains cancel out Arctic losses',
+        text: 'Whatever melts in the north freezes back in the south; overall the ice is holding steady.',
+      },
+    ],
     topics: ['sea-ice', 'trends'],
     weight: 4,
     calculations: [],
@@ -278,8 +479,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'Climate has always changed, so today’s change is natural',
-    text: 'The climate changed long before factories, so this is just another natural cycle.',
+    phrasings: [
+      {
+        summary: 'Climate has always changed, so today’s change is natural',
+        text: 'The climate changed long before factories, so this is just another natural cycle.',
+      },
+      {
+        summary: 'Ice ages came and went without people',
+        text: 'Ice ages came and went without a single car, so people cannot be the cause now.',
+      },
+      {
+        summary: 'Medieval vineyards show it was warmer before factories',
+        text: 'There were vineyards near {place} in the Middle Ages; it was warmer then without any factories.',
+      },
+      {
+        summary: 'Today’s warming is the top of a natural cycle',
+        text: 'Warm and cold periods follow each other naturally; we are simply at the top of a cycle.',
+      },
+    ],
     topics: ['attribution', 'paleoclimate'],
     weight: 7,
     calculations: ['co2-forcing'],
@@ -293,8 +510,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'The 1930s were hotter than today',
-    text: 'The 1930s were the hottest decade on record, hotter than anything since.',
+    phrasings: [
+      {
+        summary: 'The 1930s were hotter than today',
+        text: 'The 1930s were the hottest decade on record, hotter than anything since.',
+      },
+      {
+        summary: 'The hottest summers were decades ago',
+        text: 'The summers of my childhood in {place} were far hotter than anything we get now.',
+      },
+      {
+        summary: 'Old heat records still stand unbeaten',
+        text: 'Most of the county’s heat records were set before {year} and still have not been broken.',
+      },
+      {
+        summary: 'The drought years of the thirties beat modern heat',
+        text: 'The drought years of the thirties were hotter than today, and there was far less carbon then.',
+      },
+    ],
     topics: ['temperature-record'],
     weight: 4,
     calculations: [],
@@ -307,8 +540,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'More CO2 only greens the planet, it cannot warm it',
-    text: 'Carbon dioxide is plant food; more of it makes {place} greener, not warmer.',
+    phrasings: [
+      {
+        summary: 'More CO2 only greens the planet, it cannot warm it',
+        text: 'Carbon dioxide is plant food; more of it makes {place} greener, not warmer.',
+      },
+      {
+        summary: 'Extra carbon dioxide is good for farming',
+        text: 'Growers around {place} pump carbon dioxide into glasshouses; more in the air means bigger harvests.',
+      },
+      {
+        summary: 'A greening Earth shows CO2 is harmless',
+        text: 'The planet has got greener since {year}, which proves extra carbon dioxide is a benefit.',
+      },
+      {
+        summary: 'Plants need more CO2, not less',
+        text: 'Cutting carbon dioxide would starve the crops; plants grow best at three times today’s level.',
+      },
+    ],
     topics: ['carbon-dioxide', 'ecosystems'],
     weight: 3,
     calculations: ['co2-forcing'],
@@ -322,8 +571,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'Heat pumps in {place} raise emissions',
-    text: 'Every heat pump fitted in {place} since {year} has raised emissions, not cut them.',
+    phrasings: [
+      {
+        summary: 'Heat pumps in {place} raise emissions',
+        text: 'Every heat pump fitted in {place} since {year} has raised emissions, not cut them.',
+      },
+      {
+        summary: 'Heat pumps burn more fuel than gas boilers',
+        text: 'A heat pump in {place} runs on electricity from gas-fired power stations, so it burns more than a boiler.',
+      },
+      {
+        summary: 'Heat pumps do not work in cold winters',
+        text: 'In a {place} winter a heat pump just blows cold air and the bills go through the roof.',
+      },
+      {
+        summary: 'Electric heating is dirtier than gas',
+        text: 'Switching {place} homes to electric heating since {year} has made the air dirtier, not cleaner.',
+      },
+    ],
     topics: ['energy', 'emissions'],
     weight: 3,
     calculations: [],
@@ -337,8 +602,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'Warming since {year} is all from urban heat islands',
-    text: 'Towns like {place} grew around the thermometers; that is the whole of the warming.',
+    phrasings: [
+      {
+        summary: 'Warming since {year} is all from urban heat islands',
+        text: 'Towns like {place} grew around the thermometers; that is the whole of the warming.',
+      },
+      {
+        summary: 'Thermometers in towns measure concrete, not climate',
+        text: 'Put a thermometer in {place} town centre and you measure the concrete, not the climate.',
+      },
+      {
+        summary: 'Rural stations show no warming since {year}',
+        text: 'The countryside stations near {place} show no warming since {year}; only the towns have warmed.',
+      },
+      {
+        summary: 'Town growth, not greenhouse gases, explains the record',
+        text: 'Every new estate around {place} adds a tenth of a degree to the record; that is all it is.',
+      },
+    ],
     topics: ['urban-heat', 'station-data'],
     weight: 4,
     calculations: [],
@@ -351,8 +632,24 @@ export const claimPatterns: readonly ClaimPattern[] = [
     },
   },
   {
-    summary: 'Climate sensitivity is too low for CO2 to matter',
-    text: 'Doubling carbon dioxide would warm us by a fraction of a degree at most.',
+    phrasings: [
+      {
+        summary: 'Climate sensitivity is too low for CO2 to matter',
+        text: 'Doubling carbon dioxide would warm us by a fraction of a degree at most.',
+      },
+      {
+        summary: 'Doubling CO2 would barely change the temperature',
+        text: 'Even if carbon dioxide doubled, the temperature would hardly notice; the effect is saturated.',
+      },
+      {
+        summary: 'The greenhouse effect of CO2 is already saturated',
+        text: 'Carbon dioxide already absorbs all the heat it can, so adding more changes nothing.',
+      },
+      {
+        summary: 'Climate models run far too hot',
+        text: 'The models assume a sensitivity three times too high; real warming will be trivial.',
+      },
+    ],
     topics: ['climate-sensitivity', 'carbon-dioxide'],
     weight: 3,
     calculations: ['sensitivity'],
@@ -378,7 +675,8 @@ export const extraTopics: readonly string[] = [
   'transport',
 ];
 
-export const places: readonly string[] = [
+/** Places the claims are made about: a few named ones and invented compounds. */
+const namedPlaces = [
   'Marrowby',
   'Wenlow',
   'Eastgate',
@@ -391,6 +689,45 @@ export const places: readonly string[] = [
   'Dunstable Fen',
   'Greywater',
   'Ashcombe Vale',
+];
+
+const placeHeads = [
+  'Brisk',
+  'Caddle',
+  'Furl',
+  'Hask',
+  'Lorrow',
+  'Marl',
+  'Nidder',
+  'Ossel',
+  'Pell',
+  'Quell',
+  'Rundle',
+  'Sallow',
+  'Skerrow',
+  'Tarn',
+  'Treck',
+  'Umber',
+  'Vell',
+  'Wendle',
+  'Yeld',
+];
+const placeTails = [
+  'by',
+  'combe',
+  'ford',
+  'holt',
+  'ley',
+  'mouth',
+  'stead',
+  'thorpe',
+  'well',
+  'wick',
+];
+
+export const places: readonly string[] = [
+  ...namedPlaces,
+  ...placeHeads.flatMap((head) => placeTails.map((tail) => head + tail)),
 ];
 
 export const givenNames: readonly string[] = [

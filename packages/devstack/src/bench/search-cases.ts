@@ -8,10 +8,12 @@ export interface TypoCase {
 
 const wordsIn = (text: string) => text.match(/\p{L}+/gu) ?? [];
 
+const phrasings = claimPatterns.flatMap((pattern) => pattern.phrasings);
+
 /** Every word of the generated claims (summaries, texts and places), lower case, once. */
 const vocabulary = [
   ...new Set(
-    [...claimPatterns.flatMap((pattern) => [pattern.summary, pattern.text]), ...places]
+    [...phrasings.flatMap((phrasing) => [phrasing.summary, phrasing.text]), ...places]
       .flatMap(wordsIn)
       .map((word) => word.toLowerCase()),
   ),
@@ -31,7 +33,7 @@ function pickWords(minLength: number, count: number): string[] {
 export const deskQueries: string[] = [
   ...pickWords(5, 16),
   ...claimPatterns.slice(0, 8).map((pattern) =>
-    wordsIn(pattern.summary.replace(/\{\w+\}/g, ''))
+    wordsIn(pattern.phrasings[0]!.summary.replace(/\{\w+\}/g, ''))
       .filter((word) => word.length >= 4)
       .slice(0, 2)
       .join(' '),
@@ -65,17 +67,17 @@ export const typoQueries: TypoCase[] = pickWords(6, 24).map((intended, index) =>
   intended,
 }));
 
-/** What a reporter types while filing a claim: each pattern's words, as said somewhere. */
+/** What a reporter types while filing a claim: each phrasing's words, as said somewhere. */
 const asSaid = (text: string) => text.replaceAll('{place}', 'Wenlow').replaceAll('{year}', '2016');
 
-export const similarQueries: string[] = claimPatterns.map((pattern) => asSaid(pattern.text));
+export const similarQueries: string[] = phrasings.map((phrasing) => asSaid(phrasing.text));
 
 /**
  * The gist of each sentence typed in haste: its three longest words, each with one slip.
  * A slip in one word of a whole sentence tests nothing, as the other words find the claim.
  */
-export const similarTypoQueries: TypoCase[] = claimPatterns.map((pattern, index) => {
-  const longest = [...new Set(wordsIn(asSaid(pattern.text)).map((word) => word.toLowerCase()))]
+export const similarTypoQueries: TypoCase[] = phrasings.map((phrasing, index) => {
+  const longest = [...new Set(wordsIn(asSaid(phrasing.text)).map((word) => word.toLowerCase()))]
     .sort((a, b) => b.length - a.length)
     .slice(0, 3);
   return {
