@@ -15,8 +15,11 @@ import { withRoom } from './typed-arrays';
 const BM25 = { k: 1.2, b: 0.7, d: 0.5 };
 const PREFIX_WEIGHT = 0.375;
 const FUZZY_WEIGHT = 0.45;
-/** Query words whose derived words are kept at most (`derive`). */
-const DERIVED_KEPT_MAX = 10_000;
+/**
+ * Query words whose derived words are kept at most (`derive`), and the longest word kept:
+ * no word of a language is longer, and a typed claim may hold a 4 000-letter one.
+ */
+const DERIVED_KEPT = { words: 10_000, letters: 40 } as const;
 /** The mark of a slot the filters left out, so it is not asked again in the same search. */
 const REJECTED = -1;
 
@@ -336,10 +339,11 @@ export class CompactIndex {
    * pause.
    */
   derive(word: string, options: { prefix: boolean; typos: number }): readonly DerivedTerm[] {
+    if (word.length > DERIVED_KEPT.letters) return this.deriveAfresh(word, options);
     const key = `${options.prefix ? '+' : '='}${options.typos}${word}`;
     let derived = this.derivedKept.get(key);
     if (!derived) {
-      if (this.derivedKept.size >= DERIVED_KEPT_MAX) this.derivedKept.clear();
+      if (this.derivedKept.size >= DERIVED_KEPT.words) this.derivedKept.clear();
       derived = this.deriveAfresh(word, options);
       this.derivedKept.set(key, derived);
     }
