@@ -12,6 +12,8 @@ export interface AccessTokenPayload {
   sub: string;
 }
 
+type AccountRow = AuthenticatedUser & Pick<User, 'status'>;
+
 /**
  * Checks the Bearer token, then loads the person: a role change or a disabled account
  * takes effect on the next request, not when the token expires.
@@ -35,10 +37,12 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
   }
 
   async validate(payload: AccessTokenPayload): Promise<AuthenticatedUser> {
-    const user = await this.users.findOne({
-      where: { id: payload.sub },
-      select: { id: true, email: true, displayName: true, role: true, status: true },
-    });
+    // Every signed-in request runs this. Plain SQL: building the same lookup with find
+    // options cost twice the query itself in the API's CPU (npm run bench).
+    const [user] = await this.users.query<AccountRow[]>(
+      'SELECT id, email, display_name AS displayName, role, status FROM users WHERE id = ?',
+      [payload.sub],
+    );
     if (!user || user.status !== 'active')
       throw new UnauthorizedException('Your session has ended; sign in again');
     return { id: user.id, email: user.email, displayName: user.displayName, role: user.role };
