@@ -91,8 +91,8 @@ export class Measurements {
    */
   async desk(): Promise<BenchRow[]> {
     const ping = [{ path: '/api/bench/ping' }];
-    // With the floor under any signed-in route (the token, the account's status), which the
-    // trivial route skips: the queue's reference does no sign-in at all.
+    // With the floor under any signed-in route (the token, the account's status): the
+    // trivial route behind the sign-in. The queue's reference does no sign-in at all.
     const [queue, pinged, signedIn] = await this.inTurns(
       [
         [
@@ -101,7 +101,7 @@ export class Measurements {
           'status=awaiting_signoff&legal=false&sort=summary&order=asc',
         ].map((filters) => this.get(`/api/claims?${filters}&pageSize=25`)),
         ping,
-        [this.get('/api/me')],
+        [this.get('/api/bench/signed-in-ping')],
       ],
       connections.throughput,
     );
@@ -110,7 +110,7 @@ export class Measurements {
     const queueFailures = failureNote(queue, reference.run);
     const floor =
       failureNote(signedIn) ??
-      `GET /api/me, signed in and reading one user, ${Math.round(signedIn.perSecond)} req/s ` +
+      `the trivial route signed in (token checked, account read), ${Math.round(signedIn.perSecond)} req/s ` +
         `(${(signedIn.perSecond / reference.run.perSecond).toFixed(2)}×), p95 ${signedIn.p95.toFixed(1)} ms`;
     const [claimPage, claimPinged] = await this.inTurns(
       [this.stack.samples.claimIds.map((id) => this.get(`/api/claims/${id}`)), ping],
