@@ -88,6 +88,12 @@ export interface DerivedTerm {
 /** One query word (or synonym): what it matched becomes the document's `matchedTerms`. */
 export interface SourceTerm {
   derived: readonly DerivedTerm[];
+  /**
+   * For a synonym, the query word it stands in for: in each field it counts as being in as
+   * many documents as the commoner of the two, so a synonym rarer than the word is not
+   * weighed above it (as Lucene's SynonymQuery takes the largest document count).
+   */
+  standsFor?: string;
 }
 
 /** Words of which a document must match at least one (all groups, for `all` queries). */
@@ -443,12 +449,15 @@ export class CompactIndex {
     use: (scorer: PostingScorer) => void,
   ): void {
     for (const { term, weight } of word.source.derived) {
-      const fields = this.postings[this.termIds.get(term)!];
+      const fields = this.postingsOf(term);
       if (!fields) continue;
+      const stoodFor = word.source.standsFor;
+      const wordFields = stoodFor === undefined ? undefined : this.postingsOf(stoodFor);
       for (let field = 0; field < fields.length; field += 1) {
         const posting = fields[field];
         if (!posting || posting.live === 0) continue;
-        const idf = Math.log(1 + (this.liveCount - posting.live + 0.5) / (posting.live + 0.5));
+        const live = Math.max(posting.live, wordFields?.[field]?.live ?? 0);
+        const idf = Math.log(1 + (this.liveCount - live + 0.5) / (live + 0.5));
         const average = this.lengthSums[field]! / Math.max(1, this.liveCount);
         use(
           new PostingScorer(this.scratch, posting, this.lengths[field]!, {
@@ -498,7 +507,12 @@ export class CompactIndex {
 
   /** Whether the document in `slot` has `term` in `field`. */
   has(term: string, field: number, slot: number): boolean {
-    return this.postings[this.termIds.get(term) ?? -1]?.[field]?.has(slot) ?? false;
+    return this.postingsOf(term)?.[field]?.has(slot) ?? false;
+  }
+
+  /** A word's posting per field; undefined for a word the index has never seen. */
+  private postingsOf(term: string): Array<Posting | undefined> | undefined {
+    return this.postings[this.termIds.get(term) ?? -1];
   }
 
   private termId(word: string): number {
