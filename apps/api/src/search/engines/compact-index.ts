@@ -16,6 +16,12 @@ const BM25 = { k: 1.2, b: 0.7, d: 0.5 };
 const PREFIX_WEIGHT = 0.375;
 const FUZZY_WEIGHT = 0.45;
 /**
+ * What a synonym weighs beside the word it stands for: half, between a typo's and the
+ * word's own. Our choice, with no published source: the word's own matches come first in
+ * the same field.
+ */
+const SYNONYM_WEIGHT = 0.5;
+/**
  * Query words whose derived words are kept at most (`derive`), and the longest word kept:
  * no word of a language is longer, and a typed claim may hold a 4 000-letter one.
  */
@@ -89,9 +95,10 @@ export interface DerivedTerm {
 export interface SourceTerm {
   derived: readonly DerivedTerm[];
   /**
-   * For a synonym, the query word it stands in for: in each field it counts as being in as
-   * many documents as the commoner of the two, so a synonym rarer than the word is not
-   * weighed above it (as Lucene's SynonymQuery takes the largest document count).
+   * For a synonym, the query word it stands in for: it weighs `SYNONYM_WEIGHT` of the word,
+   * and in each field counts as being in as many documents as the commoner of the two, so
+   * a synonym rarer than the word is not weighed above it (as Lucene's SynonymQuery takes
+   * the largest document count).
    */
   standsFor?: string;
 }
@@ -448,11 +455,12 @@ export class CompactIndex {
     boosts: readonly number[],
     use: (scorer: PostingScorer) => void,
   ): void {
-    for (const { term, weight } of word.source.derived) {
+    const { derived, standsFor } = word.source;
+    const wordFields = standsFor === undefined ? undefined : this.postingsOf(standsFor);
+    const sourceWeight = standsFor === undefined ? 1 : SYNONYM_WEIGHT;
+    for (const { term, weight } of derived) {
       const fields = this.postingsOf(term);
       if (!fields) continue;
-      const stoodFor = word.source.standsFor;
-      const wordFields = stoodFor === undefined ? undefined : this.postingsOf(stoodFor);
       for (let field = 0; field < fields.length; field += 1) {
         const posting = fields[field];
         if (!posting || posting.live === 0) continue;
@@ -461,7 +469,7 @@ export class CompactIndex {
         const average = this.lengthSums[field]! / Math.max(1, this.liveCount);
         use(
           new PostingScorer(this.scratch, posting, this.lengths[field]!, {
-            boost: weight * boosts[field]! * idf,
+            boost: sourceWeight * weight * boosts[field]! * idf,
             perWord: (BM25.k * BM25.b) / average,
             sourceIndex: index + 1,
             groupMark: word.groupIndex + 1,

@@ -44,13 +44,6 @@ const stopWords = new Set(
   ).split(' '),
 );
 
-/**
- * What a synonym weighs beside the word itself: half, between a typo's (0.45) and the
- * word's own (1). Our choice, with no published source: the word's own matches come first
- * in the same field.
- */
-const SYNONYM_WEIGHT = 0.5;
-
 const fieldsOf = (document: SearchDocument) => searchFieldNames.map((field) => document[field]);
 const boosts = searchFieldNames.map((field) => searchFields[field]);
 
@@ -195,9 +188,7 @@ export class EmbeddedSearchEngine extends SearchEngine {
         // A synonym is a word the desk chose: it matches as written, not with typos, and
         // weighs less than the word itself, so the word's own matches come first.
         ...(searchSynonyms[word] ?? []).map((synonym) => ({
-          derived: this.index
-            .derive(synonym, { prefix: false, typos: 0 })
-            .map(({ term, weight }) => ({ term, weight: weight * SYNONYM_WEIGHT })),
+          derived: this.index.derive(synonym, { prefix: false, typos: 0 }),
           standsFor: word,
         })),
       ];
